@@ -1,0 +1,2 @@
+export * from './auth/permissions.js';
+export * from './auth/user.js';
