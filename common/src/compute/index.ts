@@ -1,0 +1,2 @@
+export * from './schemas.js';
+export * from './run.js';

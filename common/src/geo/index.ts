@@ -1,0 +1,2 @@
+export * from './great-circle.js';
+export * from './solar.js';
