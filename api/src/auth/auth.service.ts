@@ -1,0 +1,37 @@
+import type { LoginResponse } from '@hopwise/common';
+import { Injectable, UnauthorizedException } from '@nestjs/common';
+import { JwtService } from '@nestjs/jwt';
+import { UsersRepository } from '../users/users.repository.js';
+import { decoyHash, verifyPassword } from './password.js';
+
+export const BAD_CREDENTIALS = 'Invalid email or password';
+export const ACCOUNT_DISABLED = 'Account disabled';
+
+/** Claims of our access tokens; `sub` is the user id as a string (RFC 7519 §4.1.2). */
+export interface AccessTokenClaims {
+  sub: string;
+  role: string;
+}
+
+@Injectable()
+export class AuthService {
+  constructor(
+    private readonly users: UsersRepository,
+    private readonly jwt: JwtService,
+  ) {}
+
+  async login(email: string, password: string): Promise<LoginResponse> {
+    const user = await this.users.findByEmail(email.toLowerCase());
+    // Unknown e-mail: still run one scrypt so the timing does not reveal which addresses exist.
+    const ok = await verifyPassword(password, user?.passwordHash ?? (await decoyHash()));
+    if (!user || !ok) throw new UnauthorizedException(BAD_CREDENTIALS);
+    // Only someone who knows the password learns that the account is disabled.
+    if (user.disabled) throw new UnauthorizedException(ACCOUNT_DISABLED);
+
+    const claims: AccessTokenClaims = { sub: String(user.id), role: user.role };
+    return {
+      accessToken: await this.jwt.signAsync(claims),
+      user: { id: user.id, email: user.email, role: user.role, displayName: user.displayName },
+    };
+  }
+}

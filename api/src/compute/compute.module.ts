@@ -1,0 +1,11 @@
+import { Module } from '@nestjs/common';
+import { ProfilesModule } from '../profiles/profiles.module.js';
+import { ComputeController } from './compute.controller.js';
+import { ComputeService } from './compute.service.js';
+
+@Module({
+  imports: [ProfilesModule],
+  controllers: [ComputeController],
+  providers: [ComputeService],
+})
+export class ComputeModule {}

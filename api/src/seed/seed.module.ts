@@ -1,0 +1,7 @@
+import { Module } from '@nestjs/common';
+import { UsersModule } from '../users/users.module.js';
+import { SoundingsModule } from '../soundings/soundings.module.js';
+import { DemoSeed } from './demo-seed.js';
+
+@Module({ imports: [UsersModule, SoundingsModule], providers: [DemoSeed] })
+export class SeedModule {}
