@@ -13,6 +13,9 @@ import { DatabaseModule } from './db/database.module.js';
 import { EventsModule } from './events/conditions-events.js';
 import { HealthController } from './health/health.controller.js';
 import { SeedModule } from './seed/seed.module.js';
+import { StationsModule } from './stations/stations.module.js';
+import { LinksModule } from './links/links.module.js';
+import { StudiesModule } from './studies/studies.module.js';
 import { ProfilesModule } from './profiles/profiles.module.js';
 import { SoundingsModule } from './soundings/soundings.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -49,6 +52,9 @@ export class AppModule {
         ComputeModule,
         ProfilesModule,
         SoundingsModule,
+        StationsModule,
+        LinksModule,
+        StudiesModule,
         SeedModule,
       ],
       controllers: [HealthController],

@@ -4,6 +4,7 @@ import { hashPassword } from '../auth/password.js';
 import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { LibraryDemoSeed } from '../soundings/library-demo-seed.js';
+import { LinksDemoSeed } from '../links/links-demo-seed.js';
 
 /** Demo-only password, printed in the README; never use these accounts on a reachable server. */
 export const DEMO_PASSWORD = 'hopwise-demo';
@@ -31,6 +32,7 @@ export class DemoSeed implements OnApplicationBootstrap {
     @Inject(APP_CONFIG) private readonly config: AppConfig,
     private readonly users: UsersRepository,
     private readonly library: LibraryDemoSeed,
+    private readonly linksDemo: LinksDemoSeed,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -53,6 +55,7 @@ export class DemoSeed implements OnApplicationBootstrap {
       );
     }
     await this.library.seed();
+    await this.linksDemo.seed();
     this.logger.warn(
       `Demo accounts created (password "${DEMO_PASSWORD}", demo only): ` +
         DEMO_ACCOUNTS.map((a) => a.email).join(', ') +

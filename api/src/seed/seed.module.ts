@@ -1,7 +1,8 @@
 import { Module } from '@nestjs/common';
 import { UsersModule } from '../users/users.module.js';
 import { SoundingsModule } from '../soundings/soundings.module.js';
+import { LinksModule } from '../links/links.module.js';
 import { DemoSeed } from './demo-seed.js';
 
-@Module({ imports: [UsersModule, SoundingsModule], providers: [DemoSeed] })
+@Module({ imports: [UsersModule, SoundingsModule, LinksModule], providers: [DemoSeed] })
 export class SeedModule {}
