@@ -1,0 +1,223 @@
+import { Inject, Injectable } from '@nestjs/common';
+import { and, asc, count, eq, inArray, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import { DB } from '../db/database.module.js';
+import type { Db } from '../db/open-database.js';
+import {
+  auditLog,
+  links,
+  netMembers,
+  nets,
+  stations,
+  users,
+  type StationRow,
+} from '../db/schema.js';
+import { isUniqueViolation, type Viewer } from './station-access.js';
+import {
+  StationNameTakenError,
+  StationsRepository,
+  type AuditEntry,
+  type NewStation,
+  type StationFilter,
+  type StationPatch,
+  type StationUsage,
+  type StationWithOwner,
+} from './stations.repository.js';
+
+/** `%text%` for LIKE, with the wildcards of the user's text escaped (`\` is the escape). */
+export function likePattern(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+const withOwner = {
+  station: stations,
+  ownerName: users.displayName,
+};
+
+const flatten = (r: { station: StationRow; ownerName: string | null }): StationWithOwner => ({
+  ...r.station,
+  ownerName: r.ownerName ?? '',
+});
+
+/** Live links and nets that use a station (nets: as control station or as a member). */
+function usageIn(db: Pick<Db, 'select'>, stationId: number, notOwnedBy?: number): StationUsage {
+  const linkCount =
+    db
+      .select({ n: count() })
+      .from(links)
+      .where(
+        and(
+          isNull(links.deletedAt),
+          or(eq(links.fromStationId, stationId), eq(links.toStationId, stationId)),
+          notOwnedBy === undefined ? undefined : ne(links.ownerId, notOwnedBy),
+        ),
+      )
+      .get()?.n ?? 0;
+  const member = db
+    .select({ netId: netMembers.netId })
+    .from(netMembers)
+    .where(eq(netMembers.stationId, stationId));
+  const netCount =
+    db
+      .select({ n: count() })
+      .from(nets)
+      .where(
+        and(
+          isNull(nets.deletedAt),
+          or(eq(nets.controlStationId, stationId), inArray(nets.id, member)),
+          notOwnedBy === undefined ? undefined : ne(nets.ownerId, notOwnedBy),
+        ),
+      )
+      .get()?.n ?? 0;
+  return { links: linkCount, nets: netCount };
+}
+
+@Injectable()
+export class DrizzleStationsRepository extends StationsRepository {
+  constructor(@Inject(DB) private readonly db: Db) {
+    super();
+  }
+
+  findById(id: number): StationWithOwner | undefined {
+    const r = this.db
+      .select(withOwner)
+      .from(stations)
+      .leftJoin(users, eq(users.id, stations.ownerId))
+      .where(and(eq(stations.id, id), isNull(stations.deletedAt)))
+      .get();
+    return r ? flatten(r) : undefined;
+  }
+
+  findByIds(ids: number[]): StationWithOwner[] {
+    if (ids.length === 0) return [];
+    return this.db
+      .select(withOwner)
+      .from(stations)
+      .leftJoin(users, eq(users.id, stations.ownerId))
+      .where(and(inArray(stations.id, ids), isNull(stations.deletedAt)))
+      .all()
+      .map(flatten);
+  }
+
+  list(viewer: Viewer, filter: StationFilter) {
+    const conditions: (SQL | undefined)[] = [isNull(stations.deletedAt)];
+    if (filter.mine) conditions.push(eq(stations.ownerId, viewer.userId));
+    else if (!viewer.seesAll) {
+      conditions.push(or(eq(stations.ownerId, viewer.userId), eq(stations.shared, true)));
+    }
+    if (filter.q) {
+      // SQLite's LIKE ignores ASCII case.
+      const p = likePattern(filter.q);
+      conditions.push(
+        or(
+          sql`${stations.name} like ${p} escape '\\'`,
+          sql`${stations.callSign} like ${p} escape '\\'`,
+        ),
+      );
+    }
+    const where = and(...conditions);
+    const rows = this.db
+      .select(withOwner)
+      .from(stations)
+      .leftJoin(users, eq(users.id, stations.ownerId))
+      .where(where)
+      .orderBy(sql`${stations.name} collate nocase`, asc(stations.id))
+      .limit(filter.limit)
+      .offset(filter.offset)
+      .all()
+      .map(flatten);
+    const total = this.db.select({ n: count() }).from(stations).where(where).get()?.n ?? 0;
+    return { rows, total };
+  }
+
+  findByOwnerAndName(ownerId: number, name: string, exceptId?: number): StationRow | undefined {
+    return this.db
+      .select()
+      .from(stations)
+      .where(
+        and(
+          eq(stations.ownerId, ownerId),
+          isNull(stations.deletedAt),
+          sql`lower(${stations.name}) = lower(${name})`,
+          exceptId === undefined ? undefined : ne(stations.id, exceptId),
+        ),
+      )
+      .get();
+  }
+
+  usage(stationId: number, notOwnedBy?: number): StationUsage {
+    return usageIn(this.db, stationId, notOwnedBy);
+  }
+
+  create(station: NewStation, audit: AuditEntry): StationWithOwner {
+    try {
+      const id = this.db.transaction((tx) => {
+        const row = tx.insert(stations).values(station).returning({ id: stations.id }).get();
+        tx.insert(auditLog)
+          .values({
+            actorUserId: audit.actorUserId,
+            action: audit.action,
+            target: `station:${row.id}`,
+            detail: audit.detail ?? null,
+          })
+          .run();
+        return row.id;
+      });
+      return this.findById(id) as StationWithOwner;
+    } catch (err) {
+      if (isUniqueViolation(err)) throw new StationNameTakenError(station.name);
+      throw err;
+    }
+  }
+
+  update(id: number, patch: StationPatch, audit: AuditEntry): StationWithOwner | undefined {
+    try {
+      const updated = this.db.transaction((tx) => {
+        const row = tx
+          .update(stations)
+          .set({ ...patch, updatedAt: new Date().toISOString() })
+          .where(and(eq(stations.id, id), isNull(stations.deletedAt)))
+          .returning({ id: stations.id })
+          .get();
+        if (!row) return false;
+        tx.insert(auditLog)
+          .values({
+            actorUserId: audit.actorUserId,
+            action: audit.action,
+            target: `station:${id}`,
+            detail: audit.detail ?? null,
+          })
+          .run();
+        return true;
+      });
+      return updated ? this.findById(id) : undefined;
+    } catch (err) {
+      if (isUniqueViolation(err)) throw new StationNameTakenError(patch.name ?? '');
+      throw err;
+    }
+  }
+
+  softDelete(id: number, audit: AuditEntry): boolean {
+    return this.db.transaction((tx) => {
+      // Re-checked inside the transaction so a link or net created meanwhile is not orphaned.
+      const inUse = usageIn(tx, id);
+      if (inUse.links + inUse.nets > 0) return false;
+      const now = new Date().toISOString();
+      const row = tx
+        .update(stations)
+        .set({ deletedAt: now, updatedAt: now })
+        .where(and(eq(stations.id, id), isNull(stations.deletedAt)))
+        .returning({ id: stations.id })
+        .get();
+      if (!row) return false;
+      tx.insert(auditLog)
+        .values({
+          actorUserId: audit.actorUserId,
+          action: audit.action,
+          target: `station:${id}`,
+          detail: audit.detail ?? null,
+        })
+        .run();
+      return true;
+    });
+  }
+}
