@@ -31,7 +31,7 @@ export const DEMO_PASSWORD = 'hopwise-demo';
 
 export async function signIn(page: Page, baseUrl: string, email: string): Promise<void> {
   await page.goto(`${baseUrl}/sign-in`);
-  await page.getByLabel('Email').fill(email);
+  await page.getByLabel(/^E-?mail/).fill(email);
   await page.getByLabel('Password').fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByRole('navigation', { name: 'Main' }).waitFor();
