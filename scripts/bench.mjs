@@ -5,7 +5,7 @@
 //   - a synthetic ionogram of 1000 frequencies (vertical route)
 //   - peak memory (max RSS and heap used seen during the runs)
 // Targets (brief): homing ≤ 1 ms per (profile, frequency, range); MUF (4 hop counts) ≤ 5 ms;
-// ionogram ≤ 20 ms. Build first: `npx tsc -b common`. `npm run bench -- --json` ends with one
+// ionogram ≤ 20 ms; plan (24 slots × 20 channels) ≤ 200 ms. Build first: `npx tsc -b common`. `npm run bench -- --json` ends with one
 // JSON line `{ "<case>": { "medianMs": n, "runs": n } }`.
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
@@ -13,7 +13,7 @@ import { fileURLToPath, pathToFileURL } from 'node:url';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const common = await import(pathToFileURL(path.join(root, 'common/dist/index.js')).href);
-const { buildProfile, computeOblique, mufPerHops, runCompute } = common;
+const { buildProfile, computeOblique, computePlan, diurnalModel, mufPerHops, runCompute } = common;
 const json = process.argv.includes('--json');
 
 const quietDayData = JSON.parse(
@@ -90,7 +90,24 @@ results['oblique route (parse + build profile + homing + MUF) 3000 km'] = bench(
   10,
 );
 
-const targets = { homing: 1, MUF: 5, ionogram: 20 };
+// Plan (SPEC §3 /api/compute/plan): 24 hourly slots × 20 channels on the ~1000 km demo path
+// Harrow Ridge → Sound Mesa, diurnal model at the midpoint (a new profile every slot).
+const planChannelsKHz = Array.from({ length: 20 }, (_, i) => 3000 + i * 1350);
+results['plan 24 slots x 20 channels (diurnal model)'] = bench(
+  (i) =>
+    computePlan({
+      from: { latDeg: 47.2, lonDeg: 8.6 },
+      to: { latDeg: 40.4, lonDeg: -3.7 + i * 1e-6 },
+      dateUtc: '2026-03-20',
+      channelsKHz: planChannelsKHz,
+      slotMinutes: 60,
+      profileAt: (at, p) => diurnalModel(p, at).profile,
+    }),
+  7,
+  2,
+);
+
+const targets = { homing: 1, MUF: 5, ionogram: 20, plan: 200 };
 for (const [name, r] of Object.entries(results)) {
   const key = Object.keys(targets).find((k) => name.startsWith(k));
   const target = key ? ` (target ≤ ${targets[key]} ms)` : '';

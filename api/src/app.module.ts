@@ -19,6 +19,12 @@ import { StudiesModule } from './studies/studies.module.js';
 import { ProfilesModule } from './profiles/profiles.module.js';
 import { SoundingsModule } from './soundings/soundings.module.js';
 import { UsersModule } from './users/users.module.js';
+import { NoticesModule } from './notices/notices.module.js';
+import { ConditionsModule } from './conditions/conditions.module.js';
+import { PlanModule } from './plan/plan.module.js';
+import { NetsModule } from './nets/nets.module.js';
+import { WatchModule } from './watch/watch.module.js';
+import { AuditModule } from './audit/audit.module.js';
 
 const MINUTE_MS = 60_000;
 const reflector = new Reflector();
@@ -55,6 +61,12 @@ export class AppModule {
         StationsModule,
         LinksModule,
         StudiesModule,
+        NoticesModule,
+        ConditionsModule,
+        PlanModule,
+        NetsModule,
+        WatchModule,
+        AuditModule,
         SeedModule,
       ],
       controllers: [HealthController],

@@ -6,3 +6,7 @@ export * from './compute/index.js';
 export * from './uploads/index.js';
 export * from './library/index.js';
 export * from './links/index.js';
+export * from './conditions/index.js';
+export * from './notices/notice.js';
+export * from './nets/index.js';
+export * from './auth/audit.js';

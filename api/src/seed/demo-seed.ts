@@ -5,6 +5,7 @@ import { APP_CONFIG, type AppConfig } from '../config/app-config.js';
 import { UsersRepository } from '../users/users.repository.js';
 import { LibraryDemoSeed } from '../soundings/library-demo-seed.js';
 import { LinksDemoSeed } from '../links/links-demo-seed.js';
+import { NetsDemoSeed } from '../nets/nets-demo-seed.js';
 
 /** Demo-only password, printed in the README; never use these accounts on a reachable server. */
 export const DEMO_PASSWORD = 'hopwise-demo';
@@ -33,6 +34,7 @@ export class DemoSeed implements OnApplicationBootstrap {
     private readonly users: UsersRepository,
     private readonly library: LibraryDemoSeed,
     private readonly linksDemo: LinksDemoSeed,
+    private readonly netsDemo: NetsDemoSeed,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
@@ -56,6 +58,7 @@ export class DemoSeed implements OnApplicationBootstrap {
     }
     await this.library.seed();
     await this.linksDemo.seed();
+    await this.netsDemo.seed();
     this.logger.warn(
       `Demo accounts created (password "${DEMO_PASSWORD}", demo only): ` +
         DEMO_ACCOUNTS.map((a) => a.email).join(', ') +

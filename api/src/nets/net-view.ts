@@ -1,0 +1,6 @@
+export type {
+  NetScheduleView,
+  NetStationView,
+  NetView,
+  ScheduleVersionView,
+} from '@hopwise/common';

@@ -1,0 +1,2 @@
+export * from './diurnal-model.js';
+export * from './plan.js';
