@@ -7,6 +7,7 @@ import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtAuthGuard } from './jwt-auth.guard.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { LoginLockout } from './login-lockout.js';
 import { PermissionsGuard } from './permissions.guard.js';
 
 type ExpiresIn = NonNullable<import('@nestjs/jwt').JwtSignOptions['expiresIn']>;
@@ -25,7 +26,7 @@ type ExpiresIn = NonNullable<import('@nestjs/jwt').JwtSignOptions['expiresIn']>;
     }),
   ],
   controllers: [AuthController],
-  providers: [AuthService, JwtStrategy, JwtAuthGuard, PermissionsGuard],
+  providers: [AuthService, JwtStrategy, JwtAuthGuard, PermissionsGuard, LoginLockout],
   exports: [JwtAuthGuard, PermissionsGuard],
 })
 export class AuthModule {}

@@ -12,6 +12,7 @@ const REASON: Record<number, string> = {
   413: 'Payload Too Large',
   415: 'Unsupported Media Type',
   422: 'Unprocessable Entity',
+  423: 'Locked',
   429: 'Too Many Requests',
   500: 'Internal Server Error',
   503: 'Service Unavailable',

@@ -37,6 +37,8 @@ class FakeUsersRepository extends UsersRepository {
     const row: UserRow = {
       id: this.rows.length + 1,
       disabled: false,
+      failedLoginCount: 0,
+      lockedUntil: null,
       createdAt: now,
       updatedAt: now,
       ...user,

@@ -2,7 +2,8 @@ import type { ListResponse, UserView } from '@hopwise/common';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { toUserView, type AuthUser } from '../auth/auth-user.js';
 import { hashPassword } from '../auth/password.js';
-import { ApiException } from '../http/api-error.js';
+import { passwordProblem } from '../auth/password-policy.js';
+import { ApiException, badRequest } from '../http/api-error.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { EmailTakenError, UsersRepository, type UserPatch } from './users.repository.js';
@@ -26,6 +27,8 @@ export class UsersService {
   async create(actor: AuthUser, dto: CreateUserDto): Promise<UserView> {
     const email = dto.email.toLowerCase();
     const displayName = dto.displayName || nameFromEmail(email);
+    const problem = passwordProblem(dto.password, email);
+    if (problem) throw badRequest(`password ${problem}`, { password: `password ${problem}` });
     try {
       const row = await this.repo.create(
         { email, displayName, role: dto.role, passwordHash: await hashPassword(dto.password) },

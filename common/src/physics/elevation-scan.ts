@@ -6,7 +6,7 @@
  * Elevations within 0.001° of a critical elevation are left out (ducted along the layer peak,
  * ill-conditioned; SPEC §3 allows omitting them).
  */
-import { brentMinimum, hopIntegrals, type ObliqueMedium } from './oblique.js';
+import { bracketedMinimum, hopIntegrals, type ObliqueMedium } from './oblique.js';
 
 /** Offset [rad] from a critical elevation inside which rays are not considered (0.001°). */
 export const CRITICAL_EXCLUSION_RAD = (0.001 * Math.PI) / 180;
@@ -90,12 +90,16 @@ function sampleElevations(iv: Omit<ElevationInterval, 'samples'>): number[] {
 
 /**
  * Samples D₁ on every interval. `refineExtremum(sampleKm)` decides whether an interior local
- * extremum of the samples is refined (default: always).
+ * extremum of the samples is refined (default: always). With `targetsKm`, a refinement stops as
+ * soon as it has passed every target beyond the sample (a minimum below all targets under it, a
+ * maximum above all targets over it): the sign changes, the only use of the refined sample, are
+ * then those of the exact extremum.
  */
 export function scanElevations(
   medium: ObliqueMedium,
   minElevationRad: number,
   refineExtremum: (sampleKm: number, isMinimum: boolean) => boolean = () => true,
+  targetsKm?: readonly number[],
 ): ElevationInterval[] {
   const out: ElevationInterval[] = [];
   for (const iv of elevationIntervals(medium, minElevationRad)) {
@@ -115,14 +119,32 @@ export function scanElevations(
       const isMax = d1 > d0 && d1 >= d2;
       if (!(isMin || isMax) || !refineExtremum(d1, isMin)) continue;
       const sign = isMin ? 1 : -1;
-      const m = brentMinimum(
+      // Stop beyond the farthest target past d1 (in the sign-flipped values: below all of them).
+      // Or once the extremum is safely short of the nearest target past d1.
+      let stopBelow = -Infinity;
+      let stopAbove = -Infinity;
+      if (targetsKm) {
+        const beyond = targetsKm.filter((t) => (isMin ? t < d1 : t > d1)).map((t) => sign * t);
+        if (beyond.length) {
+          stopBelow = Math.min(...beyond);
+          stopAbove = Math.max(...beyond);
+        }
+      }
+      // The three samples bracket the extremum: start there with a parabolic step.
+      const m = bracketedMinimum(
         (x) => {
           const hop = hopIntegrals(medium, x);
           return hop ? sign * hop.groundRangeKm : Infinity;
         },
         samples[i - 1].elevationRad,
+        sign * d0,
+        samples[i].elevationRad,
+        sign * d1,
         samples[i + 1].elevationRad,
+        sign * d2,
         EXTREMUM_TOLERANCE_RAD,
+        stopBelow,
+        stopAbove,
       );
       if (Number.isFinite(m.fx) && sign * m.fx < sign * d1) {
         refined.push({ elevationRad: m.x, groundRangeKm: sign * m.fx });

@@ -18,7 +18,13 @@ import {
 import { scanElevations } from './elevation-scan.js';
 import { InputError } from './errors.js';
 import { mufPerHops } from './muf.js';
-import { hopIntegrals, prepareMedium, type EarthModel, type ObliqueMedium } from './oblique.js';
+import {
+  hopIntegrals,
+  prepareMedium,
+  type EarthModel,
+  type HopIntegrals,
+  type ObliqueMedium,
+} from './oblique.js';
 import type { Profile } from './profile.js';
 import { brentRoot } from './quadrature.js';
 import { rayPathPoints, type RayPathPoint } from './raypath.js';
@@ -95,6 +101,8 @@ interface Solution {
   hops: number;
   elevationRad: number;
   ray: 'low' | 'high';
+  /** The hop integrals at elevationRad when the search computed them (spares a recomputation). */
+  hop?: HopIntegrals;
 }
 
 /** Every (hops, elevation) with hops·D₁ = G on the scan of one frequency. */
@@ -108,7 +116,7 @@ export function findSolutions(
   // Refine a sampled extremum only if the true one could cross some target between samples.
   const near = (d: number, isMin: boolean) =>
     targets.some((t) => (isMin ? d > t && d < 1.5 * t : d < t && d > t / 1.5));
-  const intervals = scanElevations(medium, minElevationRad, near);
+  const intervals = scanElevations(medium, minElevationRad, near, targets);
   const out: Solution[] = [];
   for (let n = 1; n <= maxHops; n++) {
     const target = targets[n - 1];
@@ -119,16 +127,27 @@ export function findSolutions(
         const d1 = s[i + 1].groundRangeKm - target;
         if (d0 === 0 && i > 0) continue; // counted as the right end of the previous pair
         if (!(d0 * d1 < 0 || d0 === 0)) continue;
+        let last: HopIntegrals | undefined;
+        let lastRad = Number.NaN;
+        const lo = s[i].elevationRad;
+        const hi = s[i + 1].elevationRad;
         const root =
           d0 === 0
-            ? s[i].elevationRad
+            ? lo
             : brentRoot(
                 (x) => {
+                  // The bracket ends are samples: their values are known.
+                  if (x === lo) return d0;
+                  if (x === hi) return d1;
                   const hop = hopIntegrals(medium, x);
+                  if (hop) {
+                    last = hop;
+                    lastRad = x;
+                  }
                   return hop ? hop.groundRangeKm - target : Number.NaN;
                 },
-                s[i].elevationRad,
-                s[i + 1].elevationRad,
+                lo,
+                hi,
                 { tolerance: ELEVATION_TOLERANCE_RAD },
               );
         if (root === null) continue;
@@ -136,6 +155,7 @@ export function findSolutions(
           hops: n,
           elevationRad: root,
           ray: s[i + 1].groundRangeKm > s[i].groundRangeKm ? 'high' : 'low',
+          hop: root === lastRad ? last : undefined,
         });
       }
     }
@@ -151,7 +171,7 @@ export function computeOblique(profile: Profile, params: ObliqueParams): Oblique
   const medium = prepareMedium(profile, frequencyMHz, earth);
   const modes: (ObliqueMode & { layerHeightKm: number })[] = [];
   for (const sol of findSolutions(medium, groundRangeKm, maxHops, minElevationRad)) {
-    const hop = hopIntegrals(medium, sol.elevationRad);
+    const hop = sol.hop ?? hopIntegrals(medium, sol.elevationRad);
     if (!hop) continue;
     const n = sol.hops;
     const layer = reflectingLayer(profile, hop.apexHeightKm);

@@ -104,6 +104,15 @@ function profileTable(profile: Profile): ProfileTable {
   return table;
 }
 
+/**
+ * The per-profile height grid (≤ 1 km steps up to 200 km above the highest peak, 10 km above,
+ * with every breakpoint and extremum of N) and f_p² [MHz²] on it; shared with the MUF bound.
+ */
+export function profileGrid(profile: Profile): { gridKm: Float64Array; gridFp2: Float64Array } {
+  const { gridKm, gridFp2 } = profileTable(profile);
+  return { gridKm, gridFp2 };
+}
+
 // ---------------------------------------------------------------------------------------------
 // Per-frequency medium
 
@@ -149,16 +158,51 @@ export function brentMinimum(
   toleranceX = 1e-10,
   maxIterations = 100,
 ): { x: number; fx: number } {
-  const golden = 0.381966011250105;
-  let x = a + golden * (b - a);
-  let w = x;
-  let v = x;
-  let fx = f(x);
-  let fw = fx;
-  let fv = fx;
+  const x = a + GOLDEN_SECTION * (b - a);
+  const fx = f(x);
+  const state: MinimiserState = { a, b, x, fx, w: x, fw: fx, v: x, fv: fx, e: 0 };
+  brentIterate(f, state, toleranceX, maxIterations, -Infinity, false);
+  return { x: state.x, fx: state.fx };
+}
+
+const GOLDEN_SECTION = 0.381966011250105;
+
+/** Bracket [a, b], best point x, second and third best w, v, last-but-one step e. */
+interface MinimiserState {
+  a: number;
+  b: number;
+  x: number;
+  fx: number;
+  w: number;
+  fw: number;
+  v: number;
+  fv: number;
+  e: number;
+}
+
+/**
+ * Brent's iteration (Brent 1973, ch. 5) from a given state; stops early when a value ≤ stopBelow is
+ * found, or (with `valueOnly`) when a parabolic step shorter than the tolerance is proposed from
+ * points close to x (the minimum value is then known to second order in the step). Returns true
+ * when it stopped at a minimum (not by `stopBelow`).
+ */
+function brentIterate(
+  f: (x: number) => number,
+  s: MinimiserState,
+  toleranceX: number,
+  maxIterations: number,
+  stopBelow: number,
+  valueOnly: boolean,
+  stopAbove = -Infinity,
+): boolean {
+  let { a, b, x, fx, w, fw, v, fv, e } = s;
   let d = 0;
-  let e = 0;
+  let converged = true;
   for (let iter = 0; iter < maxIterations; iter++) {
+    if (fx <= stopBelow) {
+      converged = false;
+      break;
+    }
     const m = 0.5 * (a + b);
     const tol = toleranceX + 1e-12 * Math.abs(x);
     if (Math.abs(x - m) <= 2 * tol - 0.5 * (b - a)) break;
@@ -174,6 +218,18 @@ export function brentMinimum(
       e = d;
       if (Math.abs(p) < Math.abs(0.5 * q * r) && p > q * (a - x) && p < q * (b - x)) {
         d = p / q;
+        if (stopAbove > -Infinity && settledAbove(x, fx, w, fw, v, fv, d, stopAbove)) {
+          converged = false;
+          break;
+        }
+        if (
+          valueOnly &&
+          Math.abs(d) < tol &&
+          Math.abs(x - w) < LOCAL_SPREAD * tol &&
+          Math.abs(x - v) < LOCAL_SPREAD * tol
+        ) {
+          break;
+        }
         const u = x + d;
         if (u - a < 2 * tol || b - u < 2 * tol) d = x < m ? tol : -tol;
         useGolden = false;
@@ -181,7 +237,7 @@ export function brentMinimum(
     }
     if (useGolden) {
       e = (x < m ? b : a) - x;
-      d = golden * e;
+      d = GOLDEN_SECTION * e;
     }
     const u = Math.abs(d) >= tol ? x + d : x + (d > 0 ? tol : -tol);
     const fu = f(u);
@@ -208,7 +264,161 @@ export function brentMinimum(
       }
     }
   }
-  return { x, fx };
+  Object.assign(s, { a, b, x, fx, w, fw, v, fv, e });
+  return converged && fx > stopBelow;
+}
+
+/**
+ * True when the parabola through (x, w, v), all within SETTLED_SPREAD_RAD of x, puts the minimum
+ * above `level` by a wide margin: fx minus ten times the predicted further drop, less 0.1 %.
+ */
+function settledAbove(
+  x: number,
+  fx: number,
+  w: number,
+  fw: number,
+  v: number,
+  fv: number,
+  d: number,
+  level: number,
+): boolean {
+  if (Math.abs(x - w) > SETTLED_SPREAD_RAD || Math.abs(x - v) > SETTLED_SPREAD_RAD || w === v) {
+    return false;
+  }
+  const fxw = (fw - fx) / (w - x);
+  const c2 = (fxw - (fv - fx) / (v - x)) / (w - v);
+  if (!(c2 > 0)) return false;
+  const drop = fx - (fx + fxw * d + c2 * d * (d + x - w));
+  return drop >= 0 && fx - 10 * drop > level + 1e-3 * Math.abs(level);
+}
+
+/** Largest spread [rad] of the three points for the test above. */
+const SETTLED_SPREAD_RAD = 1e-3;
+
+/** Spread [tolerances] of the three points within which a short parabolic step ends a search. */
+const LOCAL_SPREAD = 200;
+
+export interface LocalMinimumOptions {
+  /** Tolerance on the abscissa. */
+  toleranceX: number;
+  /** A point near the minimum (e.g. the minimiser at a nearby frequency). */
+  guess: number;
+  /** First bracketing step from the guess. */
+  step: number;
+  /** Return as soon as a value ≤ stopBelow is seen (default −∞). */
+  stopBelow?: number;
+}
+
+/**
+ * A local minimum of f on [lo, hi] searched from a guess: downhill bracketing with golden growth
+ * (Press et al., Numerical Recipes 3rd ed. §10.1), then Brent's iteration started from the bracket
+ * with a parabolic step, ended as soon as the minimum value is settled. An end of [lo, hi] where f
+ * keeps falling is returned as the minimum. `converged` is false after a `stopBelow` exit.
+ */
+export function localMinimum(
+  f: (x: number) => number,
+  lo: number,
+  hi: number,
+  options: LocalMinimumOptions,
+): { x: number; fx: number; converged: boolean } {
+  const { toleranceX } = options;
+  const stop = options.stopBelow ?? -Infinity;
+  let b = Math.min(hi, Math.max(lo, options.guess));
+  let fb = f(b);
+  if (fb <= stop) return { x: b, fx: fb, converged: false };
+  const step = Math.max(2 * toleranceX, Math.min(options.step, 0.5 * (hi - lo)));
+  let a = Math.max(lo, b - step);
+  let fa = a === b ? fb : f(a);
+  if (fa <= stop) return { x: a, fx: fa, converged: false };
+  let c = Math.min(hi, b + step);
+  let fc = c === b ? fb : f(c);
+  if (fc <= stop) return { x: c, fx: fc, converged: false };
+  const GROW = 3; // bracket growth per step (golden 1.618 in NR; larger: guesses are near)
+  for (let k = 0; k < 80 && !(fb <= fa && fb <= fc); k++) {
+    if (fa < fb) {
+      if (a === lo) return endMinimum(f, lo, b, fa, fb, toleranceX, stop);
+      c = b;
+      fc = fb;
+      b = a;
+      fb = fa;
+      a = Math.max(lo, b - GROW * (c - b));
+      fa = f(a);
+      if (fa <= stop) return { x: a, fx: fa, converged: false };
+    } else {
+      if (c === hi) {
+        const r = endMinimum((x) => f(-x), -hi, -b, fc, fb, toleranceX, stop);
+        return { ...r, x: -r.x };
+      }
+      a = b;
+      fa = fb;
+      b = c;
+      fb = fc;
+      c = Math.min(hi, b + GROW * (b - a));
+      fc = f(c);
+      if (fc <= stop) return { x: c, fx: fc, converged: false };
+    }
+  }
+  if (!(fb <= fa && fb <= fc)) return { x: b, fx: fb, converged: true }; // flat: b will do
+  return bracketedMinimum(f, a, fa, b, fb, c, fc, toleranceX, stop);
+}
+
+/**
+ * Brent's iteration from a bracket a < b < c with f(b) ≤ f(a), f(c), starting with a parabolic
+ * step and ended as soon as the minimum value is settled (or a value ≤ stopBelow is seen, or the
+ * minimum is safely above stopAbove: see settledAbove). `converged` is false after such a stop.
+ */
+export function bracketedMinimum(
+  f: (x: number) => number,
+  a: number,
+  fa: number,
+  b: number,
+  fb: number,
+  c: number,
+  fc: number,
+  toleranceX: number,
+  stopBelow = -Infinity,
+  stopAbove = -Infinity,
+): { x: number; fx: number; converged: boolean } {
+  const [w, fw, v, fv] = fa <= fc ? [a, fa, c, fc] : [c, fc, a, fa];
+  const state: MinimiserState = { a, b: c, x: b, fx: fb, w, fw, v, fv, e: c - a };
+  const converged = brentIterate(f, state, toleranceX, 100, stopBelow, true, stopAbove);
+  return { x: state.x, fx: state.fx, converged };
+}
+
+/**
+ * f falls towards the end lo of [lo, b] (f(lo) < f(b)): the minimum is at lo unless f dips below
+ * f(lo) inside; one midpoint test decides (Brent on [lo, b] if it does).
+ */
+function endMinimum(
+  f: (x: number) => number,
+  lo: number,
+  b: number,
+  fLo: number,
+  fb: number,
+  toleranceX: number,
+  stop: number,
+): { x: number; fx: number; converged: boolean } {
+  if (b - lo > 4 * toleranceX) {
+    const mid = 0.5 * (lo + b);
+    const fMid = f(mid);
+    if (fMid <= stop) return { x: mid, fx: fMid, converged: false };
+    if (fMid < fLo) {
+      const state: MinimiserState = {
+        a: lo,
+        b,
+        x: mid,
+        fx: fMid,
+        w: lo,
+        fw: fLo,
+        v: b,
+        fv: fb,
+        e: b - lo,
+      };
+      const converged = brentIterate(f, state, toleranceX, 100, stop, true);
+      return { x: state.x, fx: state.fx, converged };
+    }
+  }
+  return { x: lo, fx: fLo, converged: true };
 }
 
 /** Prepares the frequency-dependent tables (penetration structure, turning-height brackets). */
@@ -314,6 +524,17 @@ let panels = 0;
 // Within turnDeltaKm of the turning height, q is interpolated linearly to turnQAtDelta (see findTurningKm).
 let turnDeltaKm = 0;
 let turnQAtDelta = 0;
+// Turning radius r_t [km] (spherical) and 1 − X(h_t) = a²/r_t² (spherical) or a² (flat).
+let turnRadiusKm = 0;
+let turnOneMinusX = 0;
+/** The turning panel takes q from the density drop (near a peak, see findTurningKm). */
+let turnFromDrop = false;
+/**
+ * q′·(h_t − h_bottom) below this many rounding units of g: the relative rounding error of q at the
+ * first Kronrod node of the turning panel (τ ≈ 2e-5·t²max) could exceed ~1e-9, against the panel
+ * tolerance of 1e-8.
+ */
+const NOISY_TURN_FACTOR = 1e13;
 const vD = new Float64Array(15);
 const vG = new Float64Array(15);
 const vP = new Float64Array(15);
@@ -358,6 +579,48 @@ function nodeValues(j: number, heightKm: number, fp2: number, jac: number, tauKm
     vG[j] = s;
     vD[j] = rayA * s;
     vP[j] = (1 - x) * s;
+  }
+}
+
+/**
+ * q at depth τ = h_t − h below the turning height without cancellation. With g(h_t) = a² and
+ * ΔX = X(h_t) − X(h) from the density drop N(h_t) − N(h_t − τ) (computed per layer, profile.ts):
+ *   spherical  q = r²ΔX − τ(r + r_t)·a²/r_t²   (r = r_t − τ),   flat  q = ΔX.
+ * (The direct form g − a² loses the digits of 1 − X next to a peak, where X ≈ 1: the noise made
+ * the adaptive quadrature of the turning panel split down to its limits.)
+ */
+function qBelowTurn(tauKm: number, deltaX: number): number {
+  if (!sph) return deltaX;
+  const r = turnRadiusKm - tauKm;
+  return r * r * deltaX - tauKm * (r + turnRadiusKm) * turnOneMinusX;
+}
+
+/** ΔX = X(h_t) − X(h_t − τ). */
+function deltaXBelow(profile: Profile, turnKm: number, tauKm: number): number {
+  return profile.densityDropPerM3(turnKm, tauKm) * FP2_MHZ2_PER_DENSITY * curInvF2;
+}
+
+/** nodeValues on the turning panel, from τ and ΔX (1 − X = 1 − X(h_t) + ΔX). */
+function turningNodeValues(j: number, tauKm: number, deltaX: number, jac: number): void {
+  let q = qBelowTurn(tauKm, deltaX);
+  if (tauKm < turnDeltaKm) q = (turnQAtDelta * tauKm) / turnDeltaKm;
+  if (!(q > 0)) {
+    vD[j] = 0;
+    vG[j] = 0;
+    vP[j] = 0;
+    return;
+  }
+  const s = jac / Math.sqrt(q);
+  const oneMinusX = turnOneMinusX + deltaX;
+  if (sph) {
+    const r = turnRadiusKm - tauKm;
+    vG[j] = r * s;
+    vD[j] = ((R0 * rayA) / r) * s;
+    vP[j] = r * oneMinusX * s;
+  } else {
+    vG[j] = s;
+    vD[j] = rayA * s;
+    vP[j] = oneMinusX * s;
   }
 }
 
@@ -435,26 +698,59 @@ function fixedPanel(
   fixedPanel(profile, seg, mid, hi, 2 * heap + 1, depth + 1);
 }
 
-/** Panel over t ∈ [lo, hi] with h = h_t − t², dh = 2t dt (the turning-point substitution). */
+/**
+ * Panel over t ∈ [lo, hi] with h = h_t − t², dh = 2t dt (the turning-point substitution); with
+ * `scaleKm` > 0 the variable is u, t = s·sinh u (see turningScaleKm).
+ */
 function turningPanel(
   profile: Profile,
   turnKm: number,
   lo: number,
   hi: number,
   depth: number,
+  scaleKm: number,
 ): void {
   const half = 0.5 * (hi - lo);
   const mid = 0.5 * (lo + hi);
   for (let j = 0; j < 15; j++) {
-    const t = mid + half * nodeOffset(j);
-    const h = turnKm - t * t;
-    nodeValues(j, h, fp2At(profile, h), 2 * t, t * t);
+    const v = mid + half * nodeOffset(j);
+    const t = scaleKm > 0 ? scaleKm * Math.sinh(v) : v;
+    const dtdv = scaleKm > 0 ? scaleKm * Math.cosh(v) : 1;
+    const tauKm = t * t;
+    if (turnFromDrop) {
+      turningNodeValues(j, tauKm, deltaXBelow(profile, turnKm, tauKm), 2 * t * dtdv);
+    } else {
+      const h = turnKm - tauKm;
+      nodeValues(j, h, fp2At(profile, h), 2 * t * dtdv, tauKm);
+    }
   }
   panelSums(half);
   if (acceptPanel(depth)) return;
-  turningPanel(profile, turnKm, lo, mid, depth + 1);
-  turningPanel(profile, turnKm, mid, hi, depth + 1);
+  turningPanel(profile, turnKm, lo, mid, depth + 1, scaleKm);
+  turningPanel(profile, turnKm, mid, hi, depth + 1, scaleKm);
 }
+
+/**
+ * Near a peak of N the ray turns where g′ is small: with τ = h_t − h = t², q ≈ q₁τ + q₂τ² and the
+ * integrand in t, 2/sqrt(q₁ + q₂t²), is a narrow peak of width s = sqrt(q₁/q₂) that costs many
+ * bisections. Then t = s·sinh u makes it smooth (s·cosh u/sqrt(q₁ + q₂s²sinh²u) = s/sqrt(q₁)).
+ * Returns s [km^½], or 0 when the plain t is as good (s not small against the t range).
+ */
+function turningScaleKm(profile: Profile, turnKm: number, tMax: number): number {
+  const q1 = turnQAtDelta / turnDeltaKm;
+  const tauKm = 0.25 * tMax * tMax;
+  const h = turnKm - tauKm;
+  const qMid = turnFromDrop
+    ? qBelowTurn(tauKm, deltaXBelow(profile, turnKm, tauKm))
+    : qOf(h, fp2At(profile, h));
+  const q2 = (qMid - q1 * tauKm) / (tauKm * tauKm);
+  if (!(q1 > 0 && q2 > 0)) return 0;
+  const s = Math.sqrt(q1 / q2);
+  return s < TURN_SCALE_FRACTION * tMax ? s : 0;
+}
+
+/** The sinh substitution is used when s < this fraction of the t range. */
+const TURN_SCALE_FRACTION = 0.25;
 
 function setRay(medium: ObliqueMedium, elevationRad: number): void {
   sph = medium.earth === 'spherical';
@@ -497,12 +793,28 @@ function findTurningKm(medium: ObliqueMedium): number | null {
     if (runningMinG[mid] <= a2) hi = mid;
     else lo = mid;
   }
-  const q = (h: number) => qOf(h, fp2At(profile, h));
+  const qAt = (h: number) => qOf(h, fp2At(profile, h));
   let i = hi;
+  let qHi = qAt(hs[i]);
   // Guard against rounding between g − a² on the grid and the cancellation-free q.
-  while (i < n - 1 && q(hs[i]) > 0) i++;
-  if (q(hs[i]) > 0) return null;
-  const root = brentRoot(q, hs[i - 1], hs[i]);
+  while (i < n - 1 && qHi > 0) qHi = qAt(hs[++i]);
+  if (qHi > 0) return null;
+  // q with the bracket ends and the last value remembered (Brent and the checks below ask again).
+  const loKm = hs[i - 1];
+  const hiKm = hs[i];
+  const qLo = qAt(loKm);
+  let lastKm = Number.NaN;
+  let lastQ = Number.NaN;
+  const q = (h: number) => {
+    if (h === loKm) return qLo;
+    if (h === hiKm) return qHi;
+    if (h !== lastKm) {
+      lastKm = h;
+      lastQ = qAt(h);
+    }
+    return lastQ;
+  };
+  const root = brentRoot(q, loKm, hiKm);
   if (root === null) return null;
   // Keep the root on the side where q ≥ 0: a turning height a rounding error too high would make
   // q < 0 at the first nodes of the turning panel (a spurious jump for the adaptive quadrature).
@@ -516,15 +828,76 @@ function findTurningKm(medium: ObliqueMedium): number | null {
   // turning panel uses the linear interpolation q ≈ q(h_t − δ)·τ/δ, τ = h_t − h (exact to O(q″δ/q′)).
   const noise = 4 * Number.EPSILON * (sph ? (R0 + h) * (R0 + h) : 1);
   let delta = 16 * Number.EPSILON * Math.max(1, h);
+  // Start the search for δ where the slope across the bracket puts q at 1e4 rounding units.
+  const slope = q(hs[i - 1]) / (h - hs[i - 1]);
+  if (slope > 0) {
+    const k = Math.floor(Math.log((1e4 * noise) / slope / delta) / Math.log(4));
+    if (k > 0 && h - delta * 4 ** k > hs[i - 1]) delta *= 4 ** k;
+  }
   let qDelta = q(h - delta);
   while (qDelta < 1e4 * noise && h - 4 * delta > hs[i - 1]) {
     delta *= 4;
     qDelta = q(h - delta);
   }
+  // Next to a peak q′ is small and the rounding of g − a² (≈ noise) is felt far from h_t: the
+  // turning panel then takes q from the density drop (qBelowTurn), consistent at δ.
+  turnRadiusKm = R0 + h;
+  turnOneMinusX = sph ? (rayA / turnRadiusKm) ** 2 : rayA * rayA;
+  const tMax2 = h - hs[0];
+  turnFromDrop = (qDelta / delta) * tMax2 < NOISY_TURN_FACTOR * noise;
+  if (turnFromDrop) qDelta = qBelowTurn(delta, deltaXBelow(profile, h, delta));
   turnDeltaKm = delta;
   turnQAtDelta = qDelta;
   return h;
 }
+
+/**
+ * A lower bound on D₁ over elevations [loRad, hiRad] without integrating (0 when none is known):
+ * as μ ≤ 1, dθ/dr = a/(r·sqrt(μ²r² − a²)) ≥ a/(r·sqrt(r² − a²)), so one hop covers at least the
+ * free-space range up to the turning height, 2R₀(arccos(a/r_t) − β₀) (flat: 2h_t·cot β₀); r_t
+ * does not decrease with β₀. On each piece [β₁, β₂] of the interval this gives
+ * 2R₀(arccos(R₀cos β₁/r_t(β₁)) − β₂), r_t(β₁) taken two grid nodes below the first with g ≤ a².
+ */
+export function hopRangeLowerBoundKm(medium: ObliqueMedium, loRad: number, hiRad: number): number {
+  if (medium.groundX !== 0 || medium.blocked || !(hiRad >= loRad)) return 0;
+  const { hs, runningMinG } = medium;
+  const R0 = medium.earthRadiusKm;
+  const spherical = medium.earth === 'spherical';
+  const n = hs.length;
+  const pieces = Math.min(
+    LOWER_BOUND_MAX_PIECES,
+    Math.ceil((hiRad - loRad) / LOWER_BOUND_PIECE_RAD),
+  );
+  let bound = Infinity;
+  for (let k = 0; k < Math.max(1, pieces); k++) {
+    const b1 = loRad + ((hiRad - loRad) * k) / pieces;
+    const b2 = pieces > 0 ? loRad + ((hiRad - loRad) * (k + 1)) / pieces : hiRad;
+    const cos1 = Math.cos(b1);
+    const a2 = spherical ? (R0 * cos1) ** 2 : cos1 * cos1;
+    // First index with runningMinG ≤ a² (non-increasing sequence).
+    let lo = 0;
+    let hi = n - 1;
+    if (runningMinG[hi] > a2) lo = hi;
+    else {
+      while (hi - lo > 1) {
+        const mid = (lo + hi) >> 1;
+        if (runningMinG[mid] <= a2) hi = mid;
+        else lo = mid;
+      }
+    }
+    const turnKm = Math.max(0, hs[Math.max(0, lo - 1)]);
+    const pieceKm = spherical
+      ? 2 * R0 * (Math.acos(Math.min(1, (R0 * cos1) / (R0 + turnKm))) - b2)
+      : (2 * turnKm) / Math.tan(b2);
+    bound = Math.min(bound, pieceKm);
+    if (!(bound > 0)) return 0;
+  }
+  return Number.isFinite(bound) ? bound : 0;
+}
+
+/** Pieces of the lower bound above: width [rad] and count limit. */
+const LOWER_BOUND_PIECE_RAD = 0.002;
+const LOWER_BOUND_MAX_PIECES = 400;
 
 export interface HopIntegrals {
   /** One-hop ground range D₁ [km]. */
@@ -576,7 +949,12 @@ export function hopIntegrals(medium: ObliqueMedium, elevationRad: number): HopIn
     fixedPanel(profile, seg, seg.loKm, seg.hiKm, 1, 0);
     lastKm = seg.hiKm;
   }
-  if (turnKm > lastKm) turningPanel(profile, turnKm, 0, Math.sqrt(turnKm - lastKm), 0);
+  if (turnKm > lastKm) {
+    const tMax = Math.sqrt(turnKm - lastKm);
+    const scaleKm = turningScaleKm(profile, turnKm, tMax);
+    const hi = scaleKm > 0 ? Math.asinh(tMax / scaleKm) : tMax;
+    turningPanel(profile, turnKm, 0, hi, 0, scaleKm);
+  }
   return {
     groundRangeKm: 2 * accD,
     groupPathKm: 2 * accG,
