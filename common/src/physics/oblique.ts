@@ -447,9 +447,12 @@ export function prepareMedium(
       reflectsVertically = true;
       break;
     }
-    const isMin = i > 0 && i + 1 < n && g[i] < g[i - 1] && g[i] <= g[i + 1];
+    // The last node is a minimum too when g falls towards it: above topKm N = 0, so g jumps back
+    // up to r² (a profile that ends with ionization, e.g. an inversion stopping at the peak).
+    const isLast = i + 1 === n;
+    const isMin = i > 0 && g[i] < g[i - 1] && (isLast || g[i] <= g[i + 1]);
     if (isMin && g[i] < record) {
-      const m = brentMinimum(gExact, gridKm[i - 1], gridKm[i + 1], 1e-9);
+      const m = brentMinimum(gExact, gridKm[i - 1], gridKm[isLast ? i : i + 1], 1e-9);
       const best = m.fx < g[i] ? m : { x: gridKm[i], fx: g[i] };
       if (best.fx <= 0) {
         reflectsVertically = true;
