@@ -7,7 +7,7 @@ export default defineConfig({
     exclude: ['node_modules/**'],
     globalSetup: ['./support/start-product.ts'],
     testTimeout: 60_000,
-    hookTimeout: 60_000,
+    hookTimeout: 180_000,
     fileParallelism: false,
   },
 });

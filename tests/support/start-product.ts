@@ -63,7 +63,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
   child.stdout?.on('data', (chunk: Buffer) => (log += chunk.toString()));
   child.stderr?.on('data', (chunk: Buffer) => (log += chunk.toString()));
   try {
-    await waitForHealth(baseUrl, child, 30_000);
+    await waitForHealth(baseUrl, child, 120_000);
   } catch (error) {
     child.kill('SIGKILL');
     throw new Error(`${(error as Error).message}\n--- product log ---\n${log}`);

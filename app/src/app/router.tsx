@@ -52,8 +52,32 @@ export const routes: RouteObject[] = [
       { path: relative(paths.map.path), lazy: lazyArea('map', () => import('./routes/map')) },
       { path: relative(paths.links.path), lazy: lazyArea('links', () => import('./routes/links')) },
       {
+        path: relative(paths.linkStudy.path),
+        lazy: lazyArea('links', () => import('./routes/link-study')),
+      },
+      {
         path: relative(paths.profiles.path),
         lazy: lazyArea('profiles', () => import('./routes/profiles')),
+      },
+      {
+        path: relative(paths.profileBuild.path),
+        lazy: lazyArea('profiles', () => import('./routes/profiles/build')),
+      },
+      {
+        path: relative(paths.profileUpload.path),
+        lazy: lazyArea('profiles', () => import('./routes/profiles/upload')),
+      },
+      {
+        path: relative(paths.profileInvert.path),
+        lazy: lazyArea('profiles', () => import('./routes/profiles/invert')),
+      },
+      {
+        path: relative(paths.profileCompare.path),
+        lazy: lazyArea('profiles', () => import('./routes/profiles/compare')),
+      },
+      {
+        path: relative(paths.profileDetail.path),
+        lazy: lazyArea('profiles', () => import('./routes/profiles/detail')),
       },
       { path: relative(paths.nets.path), lazy: lazyArea('nets', () => import('./routes/nets')) },
       {
@@ -63,6 +87,10 @@ export const routes: RouteObject[] = [
       {
         path: relative(paths.adminUsers.path),
         lazy: lazyArea('admin', () => import('./routes/admin/users')),
+      },
+      {
+        path: relative(paths.adminAudit.path),
+        lazy: lazyArea('admin', () => import('./routes/admin/audit')),
       },
       { path: '*', lazy: lazyRoute(() => import('./routes/not-found')) },
     ],

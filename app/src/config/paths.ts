@@ -9,10 +9,32 @@ export const paths = {
   dashboard: { path: '/dashboard', getHref: () => '/dashboard' },
   map: { path: '/map', getHref: () => '/map' },
   links: { path: '/links', getHref: () => '/links' },
+  linkStudy: {
+    path: '/links/:linkId/study',
+    getHref: (linkId: number | string, studyId?: number) =>
+      studyId ? `/links/${linkId}/study?study=${studyId}` : `/links/${linkId}/study`,
+  },
   profiles: { path: '/profiles', getHref: () => '/profiles' },
+  profileBuild: { path: '/profiles/build', getHref: () => '/profiles/build' },
+  profileUpload: { path: '/profiles/upload', getHref: () => '/profiles/upload' },
+  profileInvert: {
+    path: '/profiles/invert',
+    getHref: (soundingId?: number) =>
+      soundingId ? `/profiles/invert?sounding=${soundingId}` : '/profiles/invert',
+  },
+  profileCompare: {
+    path: '/profiles/compare',
+    getHref: (ids?: readonly number[]) =>
+      ids && ids.length > 0 ? `/profiles/compare?ids=${ids.join(',')}` : '/profiles/compare',
+  },
+  profileDetail: {
+    path: '/profiles/:profileId',
+    getHref: (id: number | string) => `/profiles/${id}`,
+  },
   nets: { path: '/nets', getHref: () => '/nets' },
   notices: { path: '/notices', getHref: () => '/notices' },
   adminUsers: { path: '/admin/users', getHref: () => '/admin/users' },
+  adminAudit: { path: '/admin/audit', getHref: () => '/admin/audit' },
 } as const;
 
 /**

@@ -6,12 +6,15 @@ import { clearToken, getToken } from './auth-token';
 export class ApiError extends Error {
   readonly status: number;
   readonly fields?: Record<string, string>;
+  /** The parsed error body as the server sent it (e.g. an upload's `rows`). */
+  readonly body?: unknown;
 
-  constructor(status: number, message: string, fields?: Record<string, string>) {
+  constructor(status: number, message: string, fields?: Record<string, string>, body?: unknown) {
     super(message);
     this.name = 'ApiError';
     this.status = status;
     this.fields = fields;
+    this.body = body;
   }
 }
 
@@ -24,6 +27,8 @@ interface RequestOptions {
   body?: unknown;
   params?: Record<string, string | number | boolean | undefined>;
   signal?: AbortSignal;
+  /** 'blob' returns the body as a Blob (file downloads); default parses JSON. */
+  responseType?: 'json' | 'blob';
 }
 
 function buildUrl(url: string, params?: RequestOptions['params']): string {
@@ -52,7 +57,7 @@ async function readBody(response: Response): Promise<unknown> {
 }
 
 /** A signed-in session ran out or was revoked: forget the token and go to sign-in, once. */
-function handleUnauthorized(): void {
+export function handleUnauthorized(): void {
   clearToken();
   const here = window.location.pathname + window.location.search;
   if (window.location.pathname !== paths.signIn.path) {
@@ -82,18 +87,23 @@ async function request<T>(url: string, options: RequestOptions = {}): Promise<T>
     );
   }
 
+  if (response.ok && options.responseType === 'blob') return (await response.blob()) as T;
   const body = await readBody(response);
   if (response.ok) return body as T;
 
   // A 401 on a request that carried a token means the session is over. A 401 without one (a wrong
   // password at sign-in) is an ordinary error for the caller to show.
   if (response.status === 401 && token) handleUnauthorized();
+  throw toApiError(response.status, response.statusText, body);
+}
 
+/** The ApiError for a failed response's status and parsed body (shared with lib/upload.ts). */
+export function toApiError(status: number, statusText: string, body: unknown): ApiError {
   if (isErrorBody(body)) {
     const message = Array.isArray(body.message) ? body.message.join('; ') : String(body.message);
-    throw new ApiError(response.status, message, body.fields);
+    return new ApiError(status, message, body.fields, body);
   }
-  throw new ApiError(response.status, response.statusText || `Request failed (${response.status})`);
+  return new ApiError(status, statusText || `Request failed (${status})`, undefined, body);
 }
 
 export const api = {

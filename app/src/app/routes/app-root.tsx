@@ -13,6 +13,7 @@ import { AppShell } from '@/components/layouts/app-shell';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/api/get-user';
 import { useLogout } from '@/features/auth/api/logout';
+import { NoticesNavBadge } from '@/features/notices/components/notices-nav-badge';
 import { getToken } from '@/lib/auth-token';
 import { navItemsFor } from '@/utils/nav-items';
 
@@ -60,7 +61,12 @@ export default function AppRoot() {
   };
 
   return (
-    <AppShell user={user.data} navItems={navItemsFor(user.data.role)} onSignOut={onSignOut}>
+    <AppShell
+      user={user.data}
+      navItems={navItemsFor(user.data.role)}
+      onSignOut={onSignOut}
+      navBadges={{ notices: <NoticesNavBadge /> }}
+    >
       <Outlet />
     </AppShell>
   );

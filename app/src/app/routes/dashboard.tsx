@@ -3,6 +3,7 @@ import { PageHeader } from '@/components/page-header';
 import { useUser } from '@/features/auth/api/get-user';
 import { SafetyNotes } from '@/features/dashboard/components/safety-notes';
 import { WelcomeCard } from '@/features/dashboard/components/welcome-card';
+import { LinkStudyCards } from '@/features/links/components/link-study-cards';
 import { navItemsFor } from '@/utils/nav-items';
 
 const useStyles = makeStyles({
@@ -32,6 +33,7 @@ export default function DashboardRoute() {
         />
         <SafetyNotes />
       </div>
+      <LinkStudyCards />
     </>
   );
 }

@@ -1,16 +1,43 @@
-import { PlugConnected24Regular } from '@fluentui/react-icons';
-import { EmptyState } from '@/components/empty-state';
+import { Subtitle1, makeStyles, tokens } from '@fluentui/react-components';
 import { PageHeader } from '@/components/page-header';
+import { useUser } from '@/features/auth/api/get-user';
+import { LinksTable } from '@/features/links/components/links-table';
+import { useStations } from '@/features/stations/api/get-stations';
+import { StationsTable } from '@/features/stations/components/stations-table';
+
+const useStyles = makeStyles({
+  section: { display: 'flex', flexDirection: 'column', marginBottom: tokens.spacingVerticalXXXL },
+  heading: { marginBottom: tokens.spacingVerticalM },
+});
 
 export default function LinksRoute() {
+  const styles = useStyles();
+  const { data: user } = useUser();
+  const stations = useStations();
+  if (!user) return null;
+  const isAdmin = user.role === 'admin';
   return (
     <>
-      <PageHeader title="Links" description="Stations, the links between them, and link studies." />
-      <EmptyState icon={<PlugConnected24Regular />} title="No links to show yet">
-        Stations and links will be listed here. For a link, a study will give the propagation modes
-        (such as 1F2), the MUF and OWF, elevation angles, group delay, phase path and multipath
-        spread for a chosen profile and time, and a 24-hour MUF chart.
-      </EmptyState>
+      <PageHeader
+        title="Links"
+        description="Your stations, the links between them, and a study of each link."
+      />
+      <section className={styles.section} aria-labelledby="links-heading">
+        <Subtitle1 as="h2" id="links-heading" className={styles.heading}>
+          Links
+        </Subtitle1>
+        <LinksTable
+          stations={stations.data?.items ?? []}
+          currentUserId={user.id}
+          isAdmin={isAdmin}
+        />
+      </section>
+      <section className={styles.section} aria-labelledby="stations-heading">
+        <Subtitle1 as="h2" id="stations-heading" className={styles.heading}>
+          Stations
+        </Subtitle1>
+        <StationsTable currentUserId={user.id} isAdmin={isAdmin} />
+      </section>
     </>
   );
 }

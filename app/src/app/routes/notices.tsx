@@ -1,19 +1,31 @@
-import { Alert24Regular } from '@fluentui/react-icons';
-import { EmptyState } from '@/components/empty-state';
+import { Caption1, makeStyles, tokens } from '@fluentui/react-components';
 import { PageHeader } from '@/components/page-header';
+import { NoticesInbox } from '@/features/notices/components/notices-inbox';
+import { PushOptIn } from '@/features/notices/components/push-opt-in';
+
+const useStyles = makeStyles({
+  caution: {
+    display: 'block',
+    marginTop: tokens.spacingVerticalL,
+    color: tokens.colorNeutralForeground3,
+  },
+});
 
 export default function NoticesRoute() {
+  const styles = useStyles();
   return (
     <>
       <PageHeader
         title="Notices"
-        description="Messages about changing band conditions on your links and nets."
+        description="What the watch noticed on the nets you belong to and the links you follow, newest first."
       />
-      <EmptyState icon={<Alert24Regular />} title="Your inbox is not available yet">
-        Notices will arrive here when the channel in force on a subscribed link or published
-        schedule rises above the MUF, the best channel changes, or a mode appears or disappears. You
-        will also be able to receive them as push notifications or e-mail.
-      </EmptyState>
+      <PushOptIn />
+      <NoticesInbox />
+      <Caption1 className={styles.caution}>
+        Notices come from predictions, which are estimates: keep an alternative path for
+        safety-of-life traffic, transmit only on channels your licence or assignment allows, and
+        observe local RF-exposure limits.
+      </Caption1>
     </>
   );
 }

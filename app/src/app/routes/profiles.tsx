@@ -1,19 +1,51 @@
-import { DataArea24Regular } from '@fluentui/react-icons';
-import { EmptyState } from '@/components/empty-state';
+import { Add24Regular, ArrowUpload24Regular } from '@fluentui/react-icons';
+import { hasPermission } from '@hopwise/common';
+import { makeStyles, tokens } from '@fluentui/react-components';
+import { LinkButton } from '@/components/link-button';
 import { PageHeader } from '@/components/page-header';
+import { paths } from '@/config/paths';
+import { useUser } from '@/features/auth/api/get-user';
+import { ProfileLibrary } from '@/features/profiles/components/profile-library';
+import { ProfilesNav } from '@/features/profiles/components/profiles-nav';
+
+const useStyles = makeStyles({
+  actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS },
+});
 
 export default function ProfilesRoute() {
+  const styles = useStyles();
+  const { data: user } = useUser();
+  if (!user) return null;
+  const canWrite = hasPermission(user.role, 'profiles:write');
   return (
     <>
       <PageHeader
         title="Profiles"
-        description="The library of electron-density profiles that predictions are computed from."
+        description="The library of electron-density profiles that predictions are computed from: yours and the published ones."
+        actions={
+          canWrite && (
+            <div className={styles.actions}>
+              <LinkButton to={paths.profileUpload.getHref()} icon={<ArrowUpload24Regular />}>
+                Upload
+              </LinkButton>
+              <LinkButton
+                to={paths.profileBuild.getHref()}
+                appearance="primary"
+                icon={<Add24Regular />}
+              >
+                Build from layers
+              </LinkButton>
+            </div>
+          )
+        }
       />
-      <EmptyState icon={<DataArea24Regular />} title="The profile library is not available yet">
-        Profiles built from layer parameters, uploaded as samples, or inverted from sounding traces
-        will be listed here with their foF2, hmF2 and vertical TEC, together with N(h) and
-        synthetic-ionogram charts and a side-by-side comparison.
-      </EmptyState>
+      <ProfilesNav canWrite={canWrite} />
+      <ProfileLibrary
+        currentUserId={user.id}
+        canWrite={canWrite}
+        canPublish={hasPermission(user.role, 'profiles:publish')}
+        isAdmin={user.role === 'admin'}
+      />
     </>
   );
 }

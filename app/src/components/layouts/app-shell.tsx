@@ -1,3 +1,4 @@
+import type { NavAreaKey } from '@hopwise/common';
 import { Text, makeStyles, mergeClasses, shorthands, tokens } from '@fluentui/react-components';
 import type { ReactNode } from 'react';
 import { Link, NavLink } from 'react-router-dom';
@@ -116,6 +117,7 @@ const useStyles = makeStyles({
     },
   },
   navIcon: { display: 'inline-flex', fontSize: '20px' },
+  navBadge: { marginLeft: 'auto', display: 'inline-flex' },
   main: {
     gridArea: 'main',
     padding: `${tokens.spacingVerticalXXL} ${tokens.spacingHorizontalXXL}`,
@@ -130,11 +132,13 @@ interface AppShellProps {
   user: ShellUser;
   navItems: NavItem[];
   onSignOut: () => void;
+  /** Extra content beside a navigation item (e.g. the unread count of Notices). */
+  navBadges?: Partial<Record<NavAreaKey, ReactNode>>;
   children: ReactNode;
 }
 
 /** Header (mark, name, theme toggle, user menu), the main navigation and the page. */
-export function AppShell({ user, navItems, onSignOut, children }: AppShellProps) {
+export function AppShell({ user, navItems, onSignOut, navBadges, children }: AppShellProps) {
   const styles = useStyles();
   return (
     <div className={styles.root}>
@@ -166,6 +170,9 @@ export function AppShell({ user, navItems, onSignOut, children }: AppShellProps)
                   {NAV_ICONS[item.key]}
                 </span>
                 {item.label}
+                {navBadges?.[item.key] && (
+                  <span className={styles.navBadge}>{navBadges[item.key]}</span>
+                )}
               </NavLink>
             </li>
           ))}
