@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { availableParallelism } from 'node:os';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { loadDeliveryConfig, type DeliveryConfig } from '../delivery/delivery-config.js';
 
 /** Validated server configuration (read once at start-up from the environment). */
 export interface AppConfig {
@@ -25,6 +26,8 @@ export interface AppConfig {
   computeWorkers: number;
   /** A computation running longer is stopped and answered 422. */
   computeTimeoutMs: number;
+  /** Watch timer, Web Push and e-mail (api/src/delivery/delivery-config.ts). */
+  delivery: DeliveryConfig;
 }
 
 export type Env = Record<string, string | undefined>;
@@ -152,6 +155,8 @@ export function loadConfig(env: Env = process.env, cwd = process.cwd()): AppConf
     );
   }
 
+  const delivery = loadDeliveryConfig(env, production, port, problems);
+
   if (problems.length > 0) throw new ConfigError(problems);
 
   if (!jwtSecret) {
@@ -173,5 +178,6 @@ export function loadConfig(env: Env = process.env, cwd = process.cwd()): AppConf
     corsOrigin,
     computeWorkers,
     computeTimeoutMs,
+    delivery,
   };
 }
