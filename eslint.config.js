@@ -4,13 +4,25 @@ import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['**/dist/**', '**/node_modules/**', 'drizzle/**', 'data/**', 'test-output/**', 'coverage/**'] },
+  {
+    ignores: [
+      '**/dist/**',
+      '**/node_modules/**',
+      'drizzle/**',
+      'data/**',
+      'test-output/**',
+      'coverage/**',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
     languageOptions: { globals: { ...globals.node } },
     rules: {
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_' },
+      ],
     },
   },
   {
@@ -28,7 +40,18 @@ export default tseslint.config(
     rules: {
       'no-restricted-imports': [
         'error',
-        { patterns: ['@nestjs/*', 'react', 'react-*', 'node:fs', 'fs', 'node:http', 'drizzle-orm*', 'better-sqlite3'] },
+        {
+          patterns: [
+            '@nestjs/*',
+            'react',
+            'react-*',
+            'node:fs',
+            'fs',
+            'node:http',
+            'drizzle-orm*',
+            'better-sqlite3',
+          ],
+        },
       ],
     },
   },
@@ -36,7 +59,18 @@ export default tseslint.config(
     // Features do not import each other (CONVENTIONS: Client).
     files: ['app/src/features/**/*.{ts,tsx}'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['**/features/*/**', '@/features/*'], message: 'Features do not import each other; move shared code to components/ or lib/.' }] }],
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              group: ['**/features/*/**', '@/features/*'],
+              message:
+                'Features do not import each other; move shared code to components/ or lib/.',
+            },
+          ],
+        },
+      ],
     },
   },
 );

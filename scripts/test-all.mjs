@@ -23,7 +23,9 @@ function run(label, command, args, options = {}) {
   const result = spawnSync(command, args, { cwd: root, stdio: 'inherit', ...options });
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   const ok = result.status === 0;
-  console.log(`=== ${label}: ${ok ? 'ok' : `FAILED (exit ${result.status ?? result.signal})`} in ${seconds} s`);
+  console.log(
+    `=== ${label}: ${ok ? 'ok' : `FAILED (exit ${result.status ?? result.signal})`} in ${seconds} s`,
+  );
   return ok;
 }
 
@@ -38,12 +40,12 @@ function check(label, command, args) {
 function vitest(label, workspace) {
   const report = path.join(outDir, `vitest-${workspace}.json`);
   rmSync(report, { force: true });
-  const ok = run(label, path.join(root, 'node_modules/.bin/vitest'), [
-    'run',
-    '--reporter=default',
-    '--reporter=json',
-    `--outputFile.json=${report}`,
-  ], { cwd: path.join(root, workspace) });
+  const ok = run(
+    label,
+    path.join(root, 'node_modules/.bin/vitest'),
+    ['run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`],
+    { cwd: path.join(root, workspace) },
+  );
   if (existsSync(report)) {
     const summary = JSON.parse(readFileSync(report, 'utf8'));
     passed += summary.numPassedTests;
@@ -63,10 +65,13 @@ function vitest(label, workspace) {
 const steps = [
   ['typecheck', () => check('typecheck', 'npm', ['run', '-s', 'typecheck'])],
   ['lint', () => check('lint', 'npm', ['run', '-s', 'lint'])],
-  ['unit', () => {
-    vitest('unit: common', 'common');
-    vitest('unit: app', 'app');
-  }],
+  [
+    'unit',
+    () => {
+      vitest('unit: common', 'common');
+      vitest('unit: app', 'app');
+    },
+  ],
   ['api', () => vitest('api', 'api')],
   ['build', () => check('build', 'npm', ['run', '-s', 'build'])],
   ['e2e', () => vitest('end-to-end', 'tests')],

@@ -47,7 +47,10 @@ describe('navigation per demo role (browser)', () => {
     const context = await browser.newContext();
     const page = await context.newPage();
     await signIn(page, baseUrl, 'admin@hopwise.test');
-    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Admin' }).click();
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Admin' })
+      .click();
     for (const email of Object.keys(EXPECTED)) {
       await page.getByRole('cell', { name: email }).first().waitFor({ timeout: 10_000 });
       expect(await page.getByRole('cell', { name: email }).count()).toBeGreaterThan(0);

@@ -28,7 +28,11 @@ function freePort(): Promise<number> {
   });
 }
 
-async function waitForHealth(baseUrl: string, child: ChildProcess, timeoutMs: number): Promise<void> {
+async function waitForHealth(
+  baseUrl: string,
+  child: ChildProcess,
+  timeoutMs: number,
+): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     if (child.exitCode !== null) throw new Error(`the product exited with code ${child.exitCode}`);
@@ -66,7 +70,7 @@ export default async function setup(project: TestProject): Promise<() => Promise
     await waitForHealth(baseUrl, child, 120_000);
   } catch (error) {
     child.kill('SIGKILL');
-    throw new Error(`${(error as Error).message}\n--- product log ---\n${log}`);
+    throw new Error(`${(error as Error).message}\n--- product log ---\n${log}`, { cause: error });
   }
   project.provide('baseUrl', baseUrl);
   return async () => {

@@ -9,7 +9,8 @@ const RAD = Math.PI / 180;
 function haversineKm(lat1: number, lon1: number, lat2: number, lon2: number, radiusKm: number) {
   const dLat = (lat2 - lat1) * RAD;
   const dLon = (lon2 - lon1) * RAD;
-  const a = Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * RAD) * Math.cos(lat2 * RAD) * Math.sin(dLon / 2) ** 2;
+  const a =
+    Math.sin(dLat / 2) ** 2 + Math.cos(lat1 * RAD) * Math.cos(lat2 * RAD) * Math.sin(dLon / 2) ** 2;
   return 2 * radiusKm * Math.asin(Math.sqrt(a));
 }
 

@@ -28,7 +28,9 @@ export function solarZenithAngleDeg(point: GeoPoint, at: Date): number {
   const sub = subsolarPoint(at);
   const cosChi =
     Math.sin(point.latDeg * DEG) * Math.sin(sub.latDeg * DEG) +
-    Math.cos(point.latDeg * DEG) * Math.cos(sub.latDeg * DEG) * Math.cos((point.lonDeg - sub.lonDeg) * DEG);
+    Math.cos(point.latDeg * DEG) *
+      Math.cos(sub.latDeg * DEG) *
+      Math.cos((point.lonDeg - sub.lonDeg) * DEG);
   return Math.acos(Math.min(1, Math.max(-1, cosChi))) / DEG;
 }
 
