@@ -119,7 +119,7 @@ describe('notices in the browser', () => {
     await expect.poll(() => publishButton.isEnabled(), { timeout: 30_000 }).toBe(true);
     await publishButton.click();
     await ctl
-      .getByRole('alertdialog')
+      .getByRole('dialog')
       .getByRole('button', { name: 'Publish', exact: true })
       .click();
     await ctl.getByText(/Published v1 for/).waitFor();
