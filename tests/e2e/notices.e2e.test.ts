@@ -118,10 +118,7 @@ describe('notices in the browser', () => {
     const publishButton = ctl.getByRole('button', { name: 'Publish…' });
     await expect.poll(() => publishButton.isEnabled(), { timeout: 30_000 }).toBe(true);
     await publishButton.click();
-    await ctl
-      .getByRole('dialog')
-      .getByRole('button', { name: 'Publish', exact: true })
-      .click();
+    await ctl.getByRole('dialog').getByRole('button', { name: 'Publish', exact: true }).click();
     await ctl.getByText(/Published v1 for/).waitFor();
     await ctl.screenshot({
       path: path.join(screenshotDir, 'notices-net-published.png'),
