@@ -60,6 +60,10 @@ export default async function setup(project: TestProject): Promise<() => Promise
       HOPWISE_DB_FILE: path.join(dataDir, 'hopwise.sqlite'),
       HOPWISE_JWT_SECRET: 'e2e-secret-not-for-production-0123456789',
       HOPWISE_DEMO: '1',
+      // Every browser test signs in afresh from 127.0.0.1: lift the per-IP limits (the throttle
+      // itself is proven by api/test/throttle.e2e-spec.ts).
+      HOPWISE_LOGIN_THROTTLE_LIMIT: '10000',
+      HOPWISE_THROTTLE_LIMIT: '100000',
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
