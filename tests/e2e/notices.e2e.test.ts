@@ -147,7 +147,7 @@ describe('notices in the browser', () => {
           await op.getByRole('heading', { level: 1, name: 'Notices' }).waitFor();
           return (await notice.count()) > 0;
         },
-        { timeout: 45_000, interval: 1000 },
+        { timeout: 120_000, interval: 2000 },
       )
       .toBe(true);
     await expect.poll(() => nav.getByRole('link', { name: /^Notices.*unread/ }).count()).toBe(1);
@@ -155,8 +155,8 @@ describe('notices in the browser', () => {
 
     // Mark all read: the badge goes away.
     await op.getByRole('button', { name: 'Mark all read' }).click();
-    await op.getByText('All read').waitFor();
+    await op.getByText(/^All read/).waitFor();
     await expect.poll(() => nav.getByRole('link', { name: /unread/ }).count()).toBe(0);
     await opContext.close();
-  }, 180_000);
+  }, 240_000);
 });
