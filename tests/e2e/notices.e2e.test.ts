@@ -129,34 +129,47 @@ describe('notices in the browser', () => {
     // The disturbance: foF2 1.5 MHz puts every demo channel above the MUF.
     await postFeed(1.5);
 
+    // The watch runs on the feed-update events (it may take a while on a busy machine): wait for
+    // the operator's notice through the API, then open the inbox once.
+    const opLogin = await fetch(`${baseUrl}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email: 'operator@hopwise.test', password: DEMO_PASSWORD }),
+    });
+    const operatorToken = ((await opLogin.json()) as { accessToken: string }).accessToken;
+    await expect
+      .poll(
+        async () => {
+          const res = await fetch(`${baseUrl}/api/notices`, {
+            headers: { authorization: `Bearer ${operatorToken}` },
+          }).catch(() => undefined);
+          if (!res?.ok) return 0;
+          return ((await res.json()) as { unread: number }).unread;
+        },
+        { timeout: 150_000, interval: 2000 },
+      )
+      .toBeGreaterThan(0);
     const opContext = await browser.newContext();
     const op = await opContext.newPage();
     await signIn(op, baseUrl, 'operator@hopwise.test');
     const nav = op.getByRole('navigation', { name: 'Main' });
-    // The watch runs on the feed-update event; the inbox refetches every 30 s — reload until it shows.
     await nav.getByRole('link', { name: /^Notices/ }).click();
     const notice = op.getByRole('heading', {
       level: 2,
       name: new RegExp(`^Net "${NET_NAME}": \\d+ kHz is above the MUF at \\d\\d:\\d\\d UTC$`),
     });
+    await notice.first().waitFor({ timeout: 60_000 });
     await expect
-      .poll(
-        async () => {
-          if ((await notice.count()) > 0) return true;
-          await op.reload();
-          await op.getByRole('heading', { level: 1, name: 'Notices' }).waitFor();
-          return (await notice.count()) > 0;
-        },
-        { timeout: 120_000, interval: 2000 },
-      )
-      .toBe(true);
-    await expect.poll(() => nav.getByRole('link', { name: /^Notices.*unread/ }).count()).toBe(1);
+      .poll(() => nav.getByRole('link', { name: /^Notices.*unread/ }).count(), { timeout: 45_000 })
+      .toBe(1);
     await op.screenshot({ path: path.join(screenshotDir, 'notices-inbox.png'), fullPage: true });
 
     // Mark all read: the badge goes away.
     await op.getByRole('button', { name: 'Mark all read' }).click();
     await op.getByText(/^All read/).waitFor();
-    await expect.poll(() => nav.getByRole('link', { name: /unread/ }).count()).toBe(0);
+    await expect
+      .poll(() => nav.getByRole('link', { name: /unread/ }).count(), { timeout: 45_000 })
+      .toBe(0);
     await opContext.close();
-  }, 240_000);
+  }, 300_000);
 });
