@@ -7,5 +7,6 @@ import { ComputeService } from './compute.service.js';
   imports: [ProfilesModule],
   controllers: [ComputeController],
   providers: [ComputeService],
+  exports: [ComputeService],
 })
 export class ComputeModule {}

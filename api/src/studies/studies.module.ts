@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ComputeModule } from '../compute/compute.module.js';
 import { LinksModule } from '../links/links.module.js';
 import { ProfilesModule } from '../profiles/profiles.module.js';
 import { DrizzleStudiesRepository } from './drizzle-studies.repository.js';
@@ -13,7 +14,7 @@ import { StudiesService } from './studies.service.js';
 
 /** Link studies (run through the compute module's worker pool) and the reference profiles. */
 @Module({
-  imports: [LinksModule, ProfilesModule],
+  imports: [ComputeModule, LinksModule, ProfilesModule],
   controllers: [StudiesController, LinkLatestStudyController, ReferenceProfilesController],
   providers: [
     StudiesService,

@@ -13,7 +13,6 @@ import {
   type UserView,
 } from '@hopwise/common';
 import { HttpException, Injectable } from '@nestjs/common';
-import { ModuleRef } from '@nestjs/core';
 import { ComputeService } from '../compute/compute.service.js';
 import { ApiException, badRequest } from '../http/api-error.js';
 import { LinksService } from '../links/links.service.js';
@@ -42,24 +41,13 @@ function renameField(field: string, index: number, inline: boolean): string {
 
 @Injectable()
 export class StudiesService {
-  private compute?: ComputeService;
-
   constructor(
     private readonly repo: StudiesRepository,
     private readonly links: LinksService,
     private readonly profiles: ProfileLookup,
     private readonly references: ReferenceProfiles,
-    private readonly moduleRef: ModuleRef,
+    private readonly compute: ComputeService,
   ) {}
-
-  /**
-   * The app's one ComputeService (one worker pool). ComputeModule does not export it, so it is
-   * looked up in the whole module graph instead of being provided a second time.
-   */
-  private computeService(): ComputeService {
-    this.compute ??= this.moduleRef.get(ComputeService, { strict: false });
-    return this.compute;
-  }
 
   list(
     user: UserView,
@@ -227,7 +215,7 @@ export class StudiesService {
     body: Record<string, unknown>,
   ): Promise<ObliqueResponse> {
     try {
-      return (await this.computeService().run('oblique', body, user)) as ObliqueResponse;
+      return (await this.compute.run('oblique', body, user)) as ObliqueResponse;
     } catch (err) {
       if (!(err instanceof HttpException)) throw err;
       const status = err.getStatus();
