@@ -58,6 +58,9 @@ export async function createApp(options: CreateAppOptions = {}): Promise<Created
     abortOnError: false,
   });
   app.disable('x-powered-by');
+  // No ETag (a hash of every JSON body): API data is per user and fetched fresh; static files
+  // keep theirs (serve-static sets its own).
+  app.set('etag', false);
   app.set('trust proxy', 'loopback');
   app.use(helmet({ contentSecurityPolicy: { useDefaults: true, directives: CSP_DIRECTIVES } }));
   app.useBodyParser('json', { limit: '2mb' });

@@ -32,6 +32,15 @@ describe('built client with SPA fallback', () => {
     expect(res.text).toBe(INDEX);
   });
 
+  it('serves index.html for a client route asked for with Accept */* (curl, scripts)', async () => {
+    const res = await request(t.http).get('/links/3').set('Accept', '*/*').expect(200);
+    expect(res.text).toBe(INDEX);
+  });
+
+  it('does not answer a JSON-only request for a client route with index.html', async () => {
+    await request(t.http).get('/map').set('Accept', 'application/json').expect(404);
+  });
+
   it('serves hashed assets with a long cache lifetime', async () => {
     const res = await request(t.http).get('/assets/main-abc123.js').expect(200);
     expect(res.headers['cache-control']).toContain('immutable');

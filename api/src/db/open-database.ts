@@ -11,6 +11,32 @@ export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Data
 /** Repo-root `drizzle/` (same depth from api/src/db and api/dist/db). */
 export const MIGRATIONS_FOLDER = fileURLToPath(new URL('../../../drizzle/', import.meta.url));
 
+/** Compiled statements kept per connection (the app issues a few dozen distinct SQL texts). */
+const STATEMENT_CACHE_SIZE = 256;
+
+/**
+ * Drizzle calls `prepare()` for every query it runs, and better-sqlite3 compiles the SQL each
+ * time; the same few dozen SQL texts repeat. Keep compiled statements in a bounded LRU keyed by
+ * the SQL text and hand them back reset (Drizzle switches reader statements to raw mode and back
+ * per call). A statement still being iterated (`busy`) is never handed out twice.
+ */
+export function cacheStatements(sqlite: Database.Database, size = STATEMENT_CACHE_SIZE): void {
+  const prepare = sqlite.prepare.bind(sqlite);
+  const cache = new Map<string, Database.Statement>();
+  sqlite.prepare = ((source: string) => {
+    const cached = cache.get(source);
+    if (cached && !cached.busy) {
+      cache.delete(source); // re-insert: most recently used last
+      cache.set(source, cached);
+      return cached.reader ? cached.raw(false) : cached;
+    }
+    const stmt = prepare(source);
+    cache.set(source, stmt);
+    if (cache.size > size) cache.delete(cache.keys().next().value as string);
+    return stmt;
+  }) as typeof sqlite.prepare;
+}
+
 /** Opens (creating its folder) and migrates the SQLite file (STACK gotcha 6). */
 export function openDatabase(file: string): Db {
   mkdirSync(dirname(file), { recursive: true });
@@ -18,6 +44,7 @@ export function openDatabase(file: string): Db {
   sqlite.pragma('journal_mode = WAL');
   sqlite.pragma('foreign_keys = ON');
   sqlite.pragma('busy_timeout = 5000');
+  cacheStatements(sqlite);
   const db = drizzle(sqlite, { schema });
   migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
   return db;

@@ -13,6 +13,7 @@ import {
   type LinkWithOwner,
   type NewLink,
 } from './links.repository.js';
+import { byShape, flags } from '../db/query-shapes.js';
 
 const withOwner = { link: links, ownerName: users.displayName };
 const flatten = (r: { link: LinkRow; ownerName: string | null }): LinkWithOwner => ({
@@ -36,27 +37,42 @@ export class DrizzleLinksRepository extends LinksRepository {
     return r ? flatten(r) : undefined;
   }
 
-  list(viewer: Viewer, filter: LinkFilter) {
+  /** List and count, prepared per shape: sees all / station filter (see db/query-shapes). */
+  private readonly listQueries = byShape((shape) => {
+    const [seesAll, byStation] = [...shape].map((c) => c === '1');
+    const stationId = sql.placeholder('stationId');
     const conditions: (SQL | undefined)[] = [isNull(links.deletedAt)];
-    if (!viewer.seesAll) conditions.push(eq(links.ownerId, viewer.userId));
-    if (filter.stationId !== undefined) {
-      conditions.push(
-        or(eq(links.fromStationId, filter.stationId), eq(links.toStationId, filter.stationId)),
-      );
+    if (!seesAll) conditions.push(eq(links.ownerId, sql.placeholder('userId')));
+    if (byStation) {
+      conditions.push(or(eq(links.fromStationId, stationId), eq(links.toStationId, stationId)));
     }
     const where = and(...conditions);
-    const rows = this.db
-      .select(withOwner)
-      .from(links)
-      .leftJoin(users, eq(users.id, links.ownerId))
-      .where(where)
-      .orderBy(sql`${links.name} collate nocase`, asc(links.id))
-      .limit(filter.limit)
-      .offset(filter.offset)
-      .all()
-      .map(flatten);
-    const total = this.db.select({ n: count() }).from(links).where(where).get()?.n ?? 0;
-    return { rows, total };
+    return {
+      rows: this.db
+        .select(withOwner)
+        .from(links)
+        .leftJoin(users, eq(users.id, links.ownerId))
+        .where(where)
+        .orderBy(sql`${links.name} collate nocase`, asc(links.id))
+        .limit(sql.placeholder('limit'))
+        .offset(sql.placeholder('offset'))
+        .prepare(),
+      total: this.db.select({ n: count() }).from(links).where(where).prepare(),
+    };
+  });
+
+  list(viewer: Viewer, filter: LinkFilter) {
+    const query = this.listQueries(flags(viewer.seesAll, filter.stationId !== undefined));
+    const values = {
+      userId: viewer.userId,
+      stationId: filter.stationId ?? 0,
+      limit: filter.limit,
+      offset: filter.offset,
+    };
+    return {
+      rows: query.rows.all(values).map(flatten),
+      total: query.total.get(values)?.n ?? 0,
+    };
   }
 
   findByOwnerAndName(ownerId: number, name: string, exceptId?: number): LinkRow | undefined {

@@ -1,5 +1,6 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { and, asc, count, desc, eq, gte, isNull, lte, or, type SQL } from 'drizzle-orm';
+import { and, asc, count, desc, eq, gte, isNull, lte, or, sql, type SQL } from 'drizzle-orm';
+import { byShape, flags } from '../db/query-shapes.js';
 import { DB } from '../db/database.module.js';
 import type { Db } from '../db/open-database.js';
 import { auditLog, users } from '../db/schema.js';
@@ -46,35 +47,78 @@ export class DrizzleProfilesRepository extends ProfilesRepository {
     return r ? { ...r.profile, ownerName: r.ownerName } : undefined;
   }
 
-  list(viewer: Viewer, filter: ProfileFilter, page: { limit: number; offset: number }) {
+  /**
+   * List and count, prepared per shape (see db/query-shapes): sees all, then which filters are
+   * present, and whether the bbox crosses the antimeridian.
+   */
+  private readonly listQueries = byShape((shape) => {
+    const [seesAll, source, owner, published, from, to, bbox, wraps] = [...shape].map(
+      (c) => c === '1',
+    );
+    const p = sql.placeholder;
     const where: (SQL | undefined)[] = [isNull(profiles.deletedAt)];
-    if (!viewer.seesAll) {
-      where.push(or(eq(profiles.ownerId, viewer.userId), eq(profiles.published, true)));
+    if (!seesAll) {
+      where.push(or(eq(profiles.ownerId, p('userId')), eq(profiles.published, true)));
     }
-    if (filter.source) where.push(eq(profiles.source, filter.source));
-    if (filter.ownerId !== undefined) where.push(eq(profiles.ownerId, filter.ownerId));
-    if (filter.published !== undefined) where.push(eq(profiles.published, filter.published));
-    if (filter.fromUtc) where.push(gte(profiles.validAtUtc, filter.fromUtc));
-    if (filter.toUtc) where.push(lte(profiles.validAtUtc, filter.toUtc));
-    if (filter.bbox) {
-      const [minLon, minLat, maxLon, maxLat] = filter.bbox;
-      where.push(gte(profiles.latDeg, minLat), lte(profiles.latDeg, maxLat));
+    if (source) where.push(eq(profiles.source, p('source')));
+    if (owner) where.push(eq(profiles.ownerId, p('ownerId')));
+    if (published) where.push(eq(profiles.published, p('published')));
+    if (from) where.push(gte(profiles.validAtUtc, p('fromUtc')));
+    if (to) where.push(lte(profiles.validAtUtc, p('toUtc')));
+    if (bbox) {
+      where.push(gte(profiles.latDeg, p('minLat')), lte(profiles.latDeg, p('maxLat')));
       where.push(
-        minLon <= maxLon
-          ? and(gte(profiles.lonDeg, minLon), lte(profiles.lonDeg, maxLon))
-          : or(gte(profiles.lonDeg, minLon), lte(profiles.lonDeg, maxLon)),
+        wraps
+          ? or(gte(profiles.lonDeg, p('minLon')), lte(profiles.lonDeg, p('maxLon')))
+          : and(gte(profiles.lonDeg, p('minLon')), lte(profiles.lonDeg, p('maxLon'))),
       );
     }
     const condition = and(...where);
-    const rows = this.selectWithOwner()
-      .where(condition)
-      .orderBy(desc(profiles.validAtUtc), asc(profiles.id))
-      .limit(page.limit)
-      .offset(page.offset)
-      .all()
-      .map((r) => ({ ...r.profile, ownerName: r.ownerName }));
-    const total = this.db.select({ n: count() }).from(profiles).where(condition).get()?.n ?? 0;
-    return { rows, total };
+    return {
+      rows: this.selectWithOwner()
+        .where(condition)
+        .orderBy(desc(profiles.validAtUtc), asc(profiles.id))
+        .limit(p('limit'))
+        .offset(p('offset'))
+        .prepare(),
+      total: this.db.select({ n: count() }).from(profiles).where(condition).prepare(),
+    };
+  });
+
+  list(viewer: Viewer, filter: ProfileFilter, page: { limit: number; offset: number }) {
+    const [minLon, minLat, maxLon, maxLat] = filter.bbox ?? [0, 0, 0, 0];
+    console.log("DEBUG", JSON.stringify(viewer), JSON.stringify(filter));
+    const query = this.listQueries(
+      flags(
+        viewer.seesAll,
+        filter.source,
+        filter.ownerId !== undefined,
+        filter.published !== undefined,
+        filter.fromUtc,
+        filter.toUtc,
+        filter.bbox,
+        minLon > maxLon,
+      ),
+    );
+    const values = {
+      userId: viewer.userId,
+      source: filter.source ?? '',
+      ownerId: filter.ownerId ?? 0,
+      // SQLite stores booleans as 0/1; a placeholder is bound as given.
+      published: filter.published ? 1 : 0,
+      fromUtc: filter.fromUtc ?? '',
+      toUtc: filter.toUtc ?? '',
+      minLat,
+      maxLat,
+      minLon,
+      maxLon,
+      limit: page.limit,
+      offset: page.offset,
+    };
+    return {
+      rows: query.rows.all(values).map((r) => ({ ...r.profile, ownerName: r.ownerName })),
+      total: query.total.get(values)?.n ?? 0,
+    };
   }
 
   create(row: NewProfileRow, audit: AuditEntry): ProfileRow {

@@ -11,6 +11,7 @@ import {
   users,
   type StationRow,
 } from '../db/schema.js';
+import { byShape, flags } from '../db/query-shapes.js';
 import { isUniqueViolation, type Viewer } from './station-access.js';
 import {
   StationNameTakenError,
@@ -98,35 +99,50 @@ export class DrizzleStationsRepository extends StationsRepository {
       .map(flatten);
   }
 
-  list(viewer: Viewer, filter: StationFilter) {
+  /** List and count, prepared per shape: mine / sees all / text filter (see db/query-shapes). */
+  private readonly listQueries = byShape((shape) => {
+    const [mine, seesAll, text] = [...shape].map((c) => c === '1');
+    const userId = sql.placeholder('userId');
+    const q = sql.placeholder('q');
     const conditions: (SQL | undefined)[] = [isNull(stations.deletedAt)];
-    if (filter.mine) conditions.push(eq(stations.ownerId, viewer.userId));
-    else if (!viewer.seesAll) {
-      conditions.push(or(eq(stations.ownerId, viewer.userId), eq(stations.shared, true)));
-    }
-    if (filter.q) {
+    if (mine) conditions.push(eq(stations.ownerId, userId));
+    else if (!seesAll) conditions.push(or(eq(stations.ownerId, userId), eq(stations.shared, true)));
+    if (text) {
       // SQLite's LIKE ignores ASCII case.
-      const p = likePattern(filter.q);
       conditions.push(
         or(
-          sql`${stations.name} like ${p} escape '\\'`,
-          sql`${stations.callSign} like ${p} escape '\\'`,
+          sql`${stations.name} like ${q} escape '\\'`,
+          sql`${stations.callSign} like ${q} escape '\\'`,
         ),
       );
     }
     const where = and(...conditions);
-    const rows = this.db
-      .select(withOwner)
-      .from(stations)
-      .leftJoin(users, eq(users.id, stations.ownerId))
-      .where(where)
-      .orderBy(sql`${stations.name} collate nocase`, asc(stations.id))
-      .limit(filter.limit)
-      .offset(filter.offset)
-      .all()
-      .map(flatten);
-    const total = this.db.select({ n: count() }).from(stations).where(where).get()?.n ?? 0;
-    return { rows, total };
+    return {
+      rows: this.db
+        .select(withOwner)
+        .from(stations)
+        .leftJoin(users, eq(users.id, stations.ownerId))
+        .where(where)
+        .orderBy(sql`${stations.name} collate nocase`, asc(stations.id))
+        .limit(sql.placeholder('limit'))
+        .offset(sql.placeholder('offset'))
+        .prepare(),
+      total: this.db.select({ n: count() }).from(stations).where(where).prepare(),
+    };
+  });
+
+  list(viewer: Viewer, filter: StationFilter) {
+    const query = this.listQueries(flags(filter.mine, viewer.seesAll, filter.q));
+    const values = {
+      userId: viewer.userId,
+      q: filter.q ? likePattern(filter.q) : '',
+      limit: filter.limit,
+      offset: filter.offset,
+    };
+    return {
+      rows: query.rows.all(values).map(flatten),
+      total: query.total.get(values)?.n ?? 0,
+    };
   }
 
   findByOwnerAndName(ownerId: number, name: string, exceptId?: number): StationRow | undefined {

@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { asc, count, eq } from 'drizzle-orm';
+import { asc, count, eq, sql } from 'drizzle-orm';
 import { DB } from '../db/database.module.js';
 import type { Db } from '../db/open-database.js';
 import { auditLog, users, type UserRow } from '../db/schema.js';
@@ -17,12 +17,20 @@ function isUniqueViolation(err: unknown): boolean {
 
 @Injectable()
 export class DrizzleUsersRepository extends UsersRepository {
+  /** Read on every authenticated request (JwtStrategy): prepared once, not rebuilt per call. */
+  private readonly byId;
+
   constructor(@Inject(DB) private readonly db: Db) {
     super();
+    this.byId = db
+      .select()
+      .from(users)
+      .where(eq(users.id, sql.placeholder('id')))
+      .prepare();
   }
 
   async findById(id: number): Promise<UserRow | undefined> {
-    return this.db.select().from(users).where(eq(users.id, id)).get();
+    return this.byId.get({ id });
   }
 
   async findByEmail(email: string): Promise<UserRow | undefined> {
