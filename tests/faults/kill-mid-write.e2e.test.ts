@@ -3,90 +3,16 @@
 // server acknowledged (201) is present. SQLite in WAL mode commits before the response is sent;
 // a kill can lose only writes that were never acknowledged.
 import Database from 'better-sqlite3';
-import { spawn, type ChildProcess } from 'node:child_process';
+import type { ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { afterAll, describe, expect, it } from 'vitest';
+import { exited, signIn, startProduct } from '../support/product-process.js';
 
-const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
 const CONCURRENCY = 8;
 /** Acknowledged writes to collect before the kill (the burst keeps going while we kill). */
 const ACKS_BEFORE_KILL = 40;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      server.close(() => resolve(port));
-    });
-    server.on('error', reject);
-  });
-}
-
-interface Product {
-  child: ChildProcess;
-  baseUrl: string;
-  log: () => string;
-}
-
-async function startProduct(dbFile: string): Promise<Product> {
-  const port = await freePort();
-  const baseUrl = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, [path.join(repoRoot, 'api/dist/main.js')], {
-    cwd: repoRoot,
-    env: {
-      ...process.env,
-      NODE_ENV: 'test',
-      PORT: String(port),
-      HOPWISE_DB_FILE: dbFile,
-      HOPWISE_JWT_SECRET: 'fault-test-secret-not-for-production-0123',
-      HOPWISE_DEMO: '1',
-      HOPWISE_THROTTLE_LIMIT: '1000000',
-      HOPWISE_LOGIN_THROTTLE_LIMIT: '1000',
-      HOPWISE_FEED_POLL_MS: '0',
-      HOPWISE_WATCH_INTERVAL_MS: '0',
-      HOPWISE_DELIVERY_INTERVAL_MS: '0',
-      HOPWISE_COMPUTE_WORKERS: '1',
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let log = '';
-  child.stdout?.on('data', (c: Buffer) => (log += c.toString()));
-  child.stderr?.on('data', (c: Buffer) => (log += c.toString()));
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`product exited ${child.exitCode}\n${log}`);
-    try {
-      if ((await fetch(`${baseUrl}/api/health`)).ok) return { child, baseUrl, log: () => log };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  child.kill('SIGKILL');
-  throw new Error(`product did not start\n${log}`);
-}
-
-async function signIn(baseUrl: string): Promise<string> {
-  const res = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'operator@hopwise.test', password: 'hopwise-demo' }),
-  });
-  expect(res.status).toBe(200);
-  return ((await res.json()) as { accessToken: string }).accessToken;
-}
-
-function exited(child: ChildProcess): Promise<void> {
-  return new Promise((resolve) => {
-    if (child.exitCode !== null || child.signalCode !== null) resolve();
-    else child.once('exit', () => resolve());
-  });
-}
 
 describe('SIGKILL in the middle of a burst of writes', () => {
   const dir = mkdtempSync(path.join(tmpdir(), 'hopwise-fault-'));

@@ -98,4 +98,12 @@ describe('loadConfig', () => {
       dbFile: '/var/lib/hopwise/db.sqlite',
     });
   });
+
+  it('keeps the 2-minute delivery lease by default and accepts a shorter one of at least 1 s', () => {
+    expect(loadConfig({}, tmp()).delivery.leaseMs).toBe(120_000);
+    expect(loadConfig({ HOPWISE_DELIVERY_LEASE_MS: '2000' }, tmp()).delivery.leaseMs).toBe(2000);
+    expect(() => loadConfig({ HOPWISE_DELIVERY_LEASE_MS: '500' }, tmp())).toThrow(
+      /HOPWISE_DELIVERY_LEASE_MS must be at least 1000/,
+    );
+  });
 });

@@ -18,8 +18,6 @@ export interface DrainResult {
   failed: number;
 }
 
-/** A claim lasts this long; a worker that died mid-send leaves the row claimable after it. */
-const LEASE_MS = 120_000;
 const BATCH = 25;
 
 /**
@@ -73,7 +71,10 @@ export class DeliveryWorker implements OnApplicationBootstrap, OnApplicationShut
       if (ids.length === 0) return result;
       for (const id of ids) {
         tried.add(id);
-        const claimed = this.outbox.claim(id, now, LEASE_MS);
+        // The claim lasts leaseMs from now (not from the drain's start, which may be long past);
+        // a server that died mid-send leaves the row claimable after it.
+        const claimAt = new Date(Math.max(Date.now(), now.getTime()));
+        const claimed = this.outbox.claim(id, claimAt, this.config.delivery.leaseMs);
         if (!claimed) continue;
         const outcome = await this.deliver(claimed);
         const at = new Date(Math.max(Date.now(), now.getTime()));
