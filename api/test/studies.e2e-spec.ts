@@ -290,12 +290,24 @@ describe('link studies', () => {
       const newest = await request(t.http).get('/api/studies?limit=1').set(bearer(operator));
       expect(newest.body.items[0].id).toBe(ids[2]);
       expect(newest.body.total).toBe(window.body.total + 1);
+      // List items carry the mode table without ray paths unless asked (?full=true).
+      type Listed = { result: { perFrequency: { modes: Mode[] }[] } };
+      const modesOf = (body: { items: Listed[] }) =>
+        body.items.flatMap((s) => s.result.perFrequency.flatMap((f) => f.modes));
+      const listedModes = modesOf(newest.body);
+      expect(listedModes.length).toBeGreaterThan(0);
+      expect(listedModes.every((m) => m.rayPath === undefined && m.groupPathKm > 0)).toBe(true);
+      const full = await request(t.http)
+        .get('/api/studies?limit=1&full=true')
+        .set(bearer(operator));
+      expect(modesOf(full.body).every((m) => (m.rayPath?.length ?? 0) > 1)).toBe(true);
 
       for (const [query, field] of [
         ['sort=name', 'sort'],
         ['order=up', 'order'],
         ['from=yesterday', 'from'],
         ['linkId=x', 'linkId'],
+        ['full=maybe', 'full'],
       ]) {
         const res = await request(t.http).get(`/api/studies?${query}`).set(bearer(operator));
         expect(res.status).toBe(400);

@@ -51,7 +51,11 @@ export class StudiesService {
 
   list(
     user: UserView,
-    query: Partial<Omit<StudyFilter, 'fromUtc' | 'toUtc'>> & { from?: string; to?: string },
+    query: Partial<Omit<StudyFilter, 'fromUtc' | 'toUtc'>> & {
+      from?: string;
+      to?: string;
+      full?: boolean;
+    },
   ): ListResponse<StudyView> {
     const { rows, total } = this.repo.list(viewerOf(user), {
       linkId: query.linkId,
@@ -62,7 +66,7 @@ export class StudiesService {
       limit: query.limit ?? DEFAULT_PAGE,
       offset: query.offset ?? 0,
     });
-    return { items: rows.map(toStudyView), total };
+    return { items: rows.map((row) => toStudyView(row, query.full === true)), total };
   }
 
   get(user: UserView, id: number): StudyView {

@@ -1,7 +1,8 @@
 import { ISO_DATE_TIME_WITH_ZONE } from '@hopwise/common';
 import { ApiPropertyOptional } from '@nestjs/swagger';
-import { Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, Matches, Min } from 'class-validator';
+import { Transform, Type } from 'class-transformer';
+import { IsBoolean, IsIn, IsInt, IsOptional, Matches, Min } from 'class-validator';
+import { queryBoolean } from '../../stations/dto/list-stations.query.js';
 import { PageQuery } from '../../stations/dto/page.query.js';
 
 const ISO_MESSAGE = 'must be an ISO 8601 date-time with a zone, e.g. 2026-03-18T00:00:00Z';
@@ -33,4 +34,12 @@ export class ListStudiesQuery extends PageQuery {
   @IsOptional()
   @IsIn(['asc', 'desc'], { message: 'order must be asc or desc' })
   order?: 'asc' | 'desc';
+
+  @ApiPropertyOptional({
+    description: 'Include the ray paths of every mode (large; GET /api/studies/{id} always does)',
+  })
+  @IsOptional()
+  @Transform(queryBoolean)
+  @IsBoolean({ message: 'full must be true or false' })
+  full?: boolean;
 }
