@@ -87,7 +87,6 @@ export class DrizzleProfilesRepository extends ProfilesRepository {
 
   list(viewer: Viewer, filter: ProfileFilter, page: { limit: number; offset: number }) {
     const [minLon, minLat, maxLon, maxLat] = filter.bbox ?? [0, 0, 0, 0];
-    console.log("DEBUG", JSON.stringify(viewer), JSON.stringify(filter));
     const query = this.listQueries(
       flags(
         viewer.seesAll,
