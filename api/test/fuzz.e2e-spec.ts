@@ -256,8 +256,6 @@ describe('bad-input fuzzing of every POST/PATCH/PUT route', () => {
   beforeAll(async () => {
     // Compute routes share one worker; a short timeout bounds any body that slips to the physics.
     // Background writers off (feed poll, watch, outbox), so row counts move only by requests.
-    // The feed module reads process.env, not createApp's env.
-    process.env.HOPWISE_FEED_POLL_MS = '0';
     t = await bootApp({
       HOPWISE_COMPUTE_TIMEOUT_MS: '3000',
       HOPWISE_FEED_POLL_MS: '0',

@@ -23,7 +23,8 @@ export interface TestApp {
 
 /**
  * Boots the real application on a fresh SQLite file in the OS temp folder. Throttling stays on
- * with limits high enough not to interfere, unless a test sets them.
+ * with limits high enough not to interfere, unless a test sets them. The conditions feed is
+ * polled only on demand (POST /api/conditions/poll), so feed profiles appear when a test asks.
  */
 export async function bootApp(env: Record<string, string> = {}): Promise<TestApp> {
   const dir = mkdtempSync(join(tmpdir(), 'hopwise-api-'));
@@ -35,6 +36,7 @@ export async function bootApp(env: Record<string, string> = {}): Promise<TestApp
       HOPWISE_THROTTLE_LIMIT: '100000',
       HOPWISE_LOGIN_THROTTLE_LIMIT: '100000',
       HOPWISE_COMPUTE_WORKERS: '1',
+      HOPWISE_FEED_POLL_MS: '0',
       ...env,
     },
     cwd: dir,

@@ -249,6 +249,11 @@ describe('profiles', () => {
     expect(window.items.map((p) => p.id)).not.toContain(seededIds['profiles/sampled-evening.json']);
     expect((await get('bbox=0,40,20,50')).total).toBeGreaterThanOrEqual(4);
     expect((await get('bbox=100,-10,120,10')).total).toBe(0);
+    // A box across the antimeridian (min lon > max lon) is the two sides of ±180°.
+    expect((await get('bbox=170,40,-170,50')).total).toBe(0);
+    expect((await get('bbox=-10,40,-20,50')).total).toBeGreaterThanOrEqual(4);
+    const all = await get('limit=100');
+    expect((await get('published=false')).total).toBe(all.total - published.total);
     const page = await get('limit=2&offset=1&full=true');
     expect(page.items).toHaveLength(2);
     expect(page.items[0].profile).toBeDefined();

@@ -28,7 +28,6 @@ describe('watch: a feed update that lowers foF2 tells the net members', () => {
   let watch: WatchService;
   let worker: DeliveryWorker;
   let subscriber: TestSubscriber;
-  const savedPoll = process.env.HOPWISE_FEED_POLL_MS;
 
   /** Posts the same foF2 to every feed region (whichever is nearest the path), then polls. */
   const postFeed = async (foF2MHz: number) => {
@@ -53,9 +52,12 @@ describe('watch: a feed update that lowers foF2 tells the net members', () => {
     };
 
   beforeAll(async () => {
-    // The feed poller reads process.env (api/src/conditions/feed-config.ts): poll on demand only.
-    process.env.HOPWISE_FEED_POLL_MS = '0';
-    t = await bootApp({ HOPWISE_WATCH_INTERVAL_MS: '0', HOPWISE_DELIVERY_INTERVAL_MS: '0' });
+    // Poll the feed on demand only; the watch and the outbox run when the test says.
+    t = await bootApp({
+      HOPWISE_FEED_POLL_MS: '0',
+      HOPWISE_WATCH_INTERVAL_MS: '0',
+      HOPWISE_DELIVERY_INTERVAL_MS: '0',
+    });
     ctl = await login(t.http, 'netcontrol@hopwise.test');
     op = await login(t.http, 'operator@hopwise.test');
     standIns = t.app.get(StandInsService);
@@ -67,8 +69,6 @@ describe('watch: a feed update that lowers foF2 tells the net members', () => {
   });
   afterAll(async () => {
     await t?.close();
-    if (savedPoll === undefined) delete process.env.HOPWISE_FEED_POLL_MS;
-    else process.env.HOPWISE_FEED_POLL_MS = savedPoll;
   });
 
   it('publishes the demo net under good conditions: no notice yet', async () => {

@@ -1,26 +1,21 @@
-import { createRequire } from 'node:module';
-import { pathToFileURL } from 'node:url';
-import { Worker } from 'node:worker_threads';
-import type { ComputeRoute } from '@hopwise/common';
+import { setTimeout as sleep } from 'node:timers/promises';
+import { fileURLToPath } from 'node:url';
+import { Piscina } from 'piscina';
+import type { ComputeOutcome, ComputeTask } from './compute-task.js';
+
+export type { ComputeOutcome, ComputeTask } from './compute-task.js';
 
 /**
- * A small pool of worker threads running the physics core, so a long or pathological computation
- * neither blocks the event loop (other requests keep flowing) nor hangs the server: a task that
- * exceeds the time limit has its worker terminated and replaced.
+ * The worker threads running the physics core (piscina), so a long or pathological computation
+ * neither blocks the event loop (other requests keep flowing) nor hangs the server: a task still
+ * unanswered at its time limit is aborted, and if it is running piscina terminates its worker and
+ * starts a fresh one. The limit counts from submission, so a task that waited in the queue gets
+ * less run time; with sub-second tasks and a limit of seconds that only matters under overload,
+ * where answering within a bounded time is the point.
  */
 
-export type ComputeOutcome =
-  | { ok: true; result: unknown }
-  | {
-      ok: false;
-      status: 400 | 422 | 500;
-      message: string;
-      fields?: Record<string, string>;
-      /** Set for ConvergenceError: its message and last state, for the server log. */
-      convergence?: string;
-      /** Set for unexpected errors: the stack, for the server log only. */
-      internal?: string;
-    };
+/** The worker module; a plain .mjs file so it loads from the build and under Vitest alike. */
+export const COMPUTE_WORKER = fileURLToPath(new URL('./compute.worker.mjs', import.meta.url));
 
 export class ComputeTimeoutError extends Error {
   constructor(readonly timeoutMs: number) {
@@ -29,127 +24,87 @@ export class ComputeTimeoutError extends Error {
   }
 }
 
-// The worker imports the built @hopwise/common (an ESM package) by absolute URL, so the same
-// code runs under `node api/dist/main.js` and under Vitest.
-const COMMON_URL = pathToFileURL(createRequire(import.meta.url).resolve('@hopwise/common')).href;
-
-const WORKER_SOURCE = `
-const { parentPort, workerData } = require('node:worker_threads');
-const common = import(workerData.commonUrl);
-const safeJson = (v) => { try { return JSON.stringify(v).slice(0, 2000); } catch { return String(v); } };
-parentPort.on('message', async ({ id, route, body }) => {
-  const c = await common;
-  try {
-    const result = c.runCompute(route, body, { resolveProfile: () => undefined });
-    parentPort.postMessage({ id, outcome: { ok: true, result } });
-  } catch (err) {
-    const mapped = c.computeErrorStatus(err);
-    const outcome = { ok: false, status: mapped.status, message: mapped.message, fields: mapped.fields };
-    if (err instanceof c.ConvergenceError) outcome.convergence = err.message + '; last state ' + safeJson(err.lastState);
-    else if (mapped.status === 500) outcome.internal = String((err && err.stack) || err);
-    parentPort.postMessage({ id, outcome });
+/** The pool is closing or closed: the task was not run, or was cancelled. */
+export class ComputePoolClosedError extends Error {
+  constructor() {
+    super('compute pool is closed');
+    this.name = 'ComputePoolClosedError';
   }
-});
-`;
-
-interface Task {
-  id: number;
-  route: ComputeRoute;
-  body: unknown;
-  timeoutMs: number;
-  resolve: (outcome: ComputeOutcome) => void;
-  reject: (err: Error) => void;
 }
 
-interface Slot {
-  worker: Worker;
-  task?: Task;
-  timer?: NodeJS.Timeout;
+export interface ComputePoolOptions {
+  /** Worker threads (all started up front and kept). */
+  size: number;
+  /** Default time limit per task [ms]. */
+  timeoutMs: number;
+  /** The worker module (tests substitute one); default compute.worker.mjs. */
+  filename?: string;
+  /** A worker failure not tied to any task (piscina's 'error' event). */
+  onError?: (err: Error) => void;
 }
 
 export class ComputePool {
-  private readonly slots: Slot[] = [];
-  private readonly queue: Task[] = [];
-  private nextId = 1;
-  private closed = false;
+  private readonly piscina: Piscina<ComputeTask, ComputeOutcome>;
+  private readonly timeoutMs: number;
+  private readonly running = new Set<Promise<unknown>>();
+  private closing = false;
 
-  constructor(
-    private readonly size: number,
-    private readonly timeoutMs: number,
-  ) {
-    for (let i = 0; i < size; i++) this.slots.push(this.spawn());
-  }
-
-  run(route: ComputeRoute, body: unknown, timeoutMs = this.timeoutMs): Promise<ComputeOutcome> {
-    if (this.closed) return Promise.reject(new Error('compute pool is closed'));
-    return new Promise((resolve, reject) => {
-      this.queue.push({ id: this.nextId++, route, body, timeoutMs, resolve, reject });
-      this.dispatch();
+  constructor(options: ComputePoolOptions) {
+    this.timeoutMs = options.timeoutMs;
+    this.piscina = new Piscina({
+      filename: options.filename ?? COMPUTE_WORKER,
+      minThreads: options.size,
+      maxThreads: options.size,
+      concurrentTasksPerWorker: 1,
     });
+    const onError = options.onError ?? ((err: Error) => process.emitWarning(err));
+    this.piscina.on('error', onError);
   }
 
-  async close(): Promise<void> {
-    this.closed = true;
-    for (const t of this.queue.splice(0)) t.reject(new Error('compute pool is closed'));
-    await Promise.all(
-      this.slots.map((s) => {
-        clearTimeout(s.timer);
-        s.task?.reject(new Error('compute pool is closed'));
-        return s.worker.terminate();
-      }),
+  /** Tasks submitted and not yet settled (queued or running). */
+  get pending(): number {
+    return this.running.size;
+  }
+
+  /**
+   * Runs one task. Rejects with ComputeTimeoutError over the time limit, ComputePoolClosedError
+   * once close() has begun, or the worker's own failure (it exited or could not start).
+   */
+  run(task: ComputeTask, timeoutMs = this.timeoutMs): Promise<ComputeOutcome> {
+    if (this.closing) return Promise.reject(new ComputePoolClosedError());
+    const abort = new AbortController();
+    const timer = setTimeout(() => abort.abort(new ComputeTimeoutError(timeoutMs)), timeoutMs);
+    const done = this.piscina.run(task, { signal: abort.signal }).then(
+      (outcome) => outcome,
+      (err: unknown) => {
+        if (abort.signal.aborted) throw abort.signal.reason as ComputeTimeoutError;
+        if (this.closing) throw new ComputePoolClosedError();
+        throw err;
+      },
     );
-  }
-
-  private spawn(): Slot {
-    const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: { commonUrl: COMMON_URL } });
-    const slot: Slot = { worker };
-    worker.on('message', (msg: { id: number; outcome: ComputeOutcome }) => {
-      if (slot.task?.id !== msg.id) return;
-      const task = slot.task;
-      this.release(slot);
-      task.resolve(msg.outcome);
+    const tracked = done.finally(() => {
+      clearTimeout(timer);
+      this.running.delete(tracked);
     });
-    worker.on('error', (err) => this.replace(slot, err));
-    worker.on('exit', () => {
-      if (!this.closed && this.slots.includes(slot))
-        this.replace(slot, new Error('compute worker exited'));
-    });
-    worker.unref();
-    return slot;
+    this.running.add(tracked);
+    return tracked;
   }
 
-  private release(slot: Slot): void {
-    clearTimeout(slot.timer);
-    slot.task = undefined;
-    slot.timer = undefined;
-    this.dispatch();
-  }
-
-  /** Drops a stuck or crashed worker (failing its task) and starts a fresh one. */
-  private replace(slot: Slot, err: Error): void {
-    const index = this.slots.indexOf(slot);
-    if (index < 0) return;
-    clearTimeout(slot.timer);
-    const task = slot.task;
-    slot.task = undefined;
-    if (!this.closed) this.slots[index] = this.spawn();
-    else this.slots.splice(index, 1);
-    void slot.worker.terminate();
-    task?.reject(err);
-    this.dispatch();
-  }
-
-  private dispatch(): void {
-    for (const slot of this.slots) {
-      if (this.queue.length === 0) return;
-      if (slot.task) continue;
-      const task = this.queue.shift() as Task;
-      slot.task = task;
-      slot.timer = setTimeout(
-        () => this.replace(slot, new ComputeTimeoutError(task.timeoutMs)),
-        task.timeoutMs,
-      );
-      slot.worker.postMessage({ id: task.id, route: task.route, body: task.body });
+  /**
+   * Refuses new tasks, lets the submitted ones finish for up to `drainMs`, then stops the
+   * workers; tasks still unsettled then reject with ComputePoolClosedError.
+   * Returns how many were cancelled that way.
+   */
+  async close(drainMs = 0): Promise<number> {
+    this.closing = true;
+    if (this.running.size > 0 && drainMs > 0) {
+      await Promise.race([
+        Promise.allSettled([...this.running]),
+        sleep(drainMs, undefined, { ref: false }),
+      ]);
     }
+    const cancelled = this.running.size;
+    await this.piscina.destroy();
+    return cancelled;
   }
 }

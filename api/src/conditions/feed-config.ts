@@ -1,7 +1,7 @@
 import type { Env } from '../config/app-config.js';
 
 /**
- * Conditions-feed settings, read from the environment at start-up (failing with every problem):
+ * Conditions-feed settings, read with the rest of the configuration (config/app-config.ts):
  *   HOPWISE_FEED_URL       base URL of the feed (unset: use the in-process stand-in)
  *   HOPWISE_FEED_STANDIN   '0' to not start the stand-in when HOPWISE_FEED_URL is unset (default on)
  *   HOPWISE_FEED_POLL_MS   poll interval [ms], default 60000; 0 = only on demand (POST /api/conditions/poll)
@@ -15,8 +15,8 @@ export interface FeedConfig {
 export const FEED_CONFIG = Symbol('FEED_CONFIG');
 const DEFAULT_POLL_MS = 60_000;
 
-export function loadFeedConfig(env: Env = process.env): FeedConfig {
-  const problems: string[] = [];
+/** Reads the feed settings; adds what is wrong to `problems` (the caller reports them all). */
+export function loadFeedConfig(env: Env, problems: string[]): FeedConfig {
   const feedUrl = env.HOPWISE_FEED_URL?.trim() || undefined;
   if (feedUrl && !/^https?:\/\/[^\s]+$/.test(feedUrl)) {
     problems.push(`HOPWISE_FEED_URL must be an http(s) URL (got "${feedUrl}")`);
@@ -32,6 +32,5 @@ export function loadFeedConfig(env: Env = process.env): FeedConfig {
       `HOPWISE_FEED_POLL_MS must be 0 or an integer from 1000 to 86400000 (got "${pollRaw}")`,
     );
   }
-  if (problems.length) throw new Error(`Invalid configuration:\n  - ${problems.join('\n  - ')}`);
   return { feedUrl, standIn: standInRaw !== '0', pollMs };
 }

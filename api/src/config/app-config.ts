@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import { availableParallelism } from 'node:os';
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, resolve } from 'node:path';
+import { loadFeedConfig, type FeedConfig } from '../conditions/feed-config.js';
 import { loadDeliveryConfig, type DeliveryConfig } from '../delivery/delivery-config.js';
 
 /** Validated server configuration (read once at start-up from the environment). */
@@ -26,8 +27,12 @@ export interface AppConfig {
   computeWorkers: number;
   /** A computation running longer is stopped and answered 422. */
   computeTimeoutMs: number;
+  /** Size bound of the compute result cache [MB]; 0 = no cache. */
+  computeCacheMb: number;
   /** Watch timer, Web Push and e-mail (api/src/delivery/delivery-config.ts). */
   delivery: DeliveryConfig;
+  /** Conditions feed (api/src/conditions/feed-config.ts). */
+  feed: FeedConfig;
 }
 
 export type Env = Record<string, string | undefined>;
@@ -50,6 +55,7 @@ const DEFAULTS = {
   HOPWISE_APP_DIST: 'app/dist',
   HOPWISE_COMPUTE_WORKERS: String(Math.max(1, Math.min(4, availableParallelism()))),
   HOPWISE_COMPUTE_TIMEOUT_MS: '20000',
+  HOPWISE_COMPUTE_CACHE_MB: '64',
 } as const;
 
 const MIN_SECRET_LENGTH = 32;
@@ -125,6 +131,7 @@ export function loadConfig(env: Env = process.env, cwd = process.cwd()): AppConf
   );
   const computeWorkers = intIn(env, 'HOPWISE_COMPUTE_WORKERS', 1, 64, problems);
   const computeTimeoutMs = intIn(env, 'HOPWISE_COMPUTE_TIMEOUT_MS', 100, 600_000, problems);
+  const computeCacheMb = intIn(env, 'HOPWISE_COMPUTE_CACHE_MB', 0, 4096, problems);
   const demo = flag(env, 'HOPWISE_DEMO', true, problems);
   const appDist = resolve(cwd, env.HOPWISE_APP_DIST?.trim() || DEFAULTS.HOPWISE_APP_DIST);
 
@@ -156,6 +163,7 @@ export function loadConfig(env: Env = process.env, cwd = process.cwd()): AppConf
   }
 
   const delivery = loadDeliveryConfig(env, production, port, problems);
+  const feed = loadFeedConfig(env, problems);
 
   if (problems.length > 0) throw new ConfigError(problems);
 
@@ -178,6 +186,8 @@ export function loadConfig(env: Env = process.env, cwd = process.cwd()): AppConf
     corsOrigin,
     computeWorkers,
     computeTimeoutMs,
+    computeCacheMb,
     delivery,
+    feed,
   };
 }

@@ -1,4 +1,5 @@
 import { Module } from '@nestjs/common';
+import { ComputeModule } from '../compute/compute.module.js';
 import { ConditionsModule } from '../conditions/conditions.module.js';
 import { LinksModule } from '../links/links.module.js';
 import { ProfilesModule } from '../profiles/profiles.module.js';
@@ -8,7 +9,7 @@ import { PlanService } from './plan.service.js';
 
 /** POST /api/compute/plan; PlanService is also used by nets and the watch. */
 @Module({
-  imports: [ConditionsModule, LinksModule, ProfilesModule, StationsModule],
+  imports: [ComputeModule, ConditionsModule, LinksModule, ProfilesModule, StationsModule],
   controllers: [PlanController],
   providers: [PlanService],
   exports: [PlanService],

@@ -11,6 +11,7 @@ import {
   type UserView,
 } from '@hopwise/common';
 import { Injectable, Logger } from '@nestjs/common';
+import { ComputeService } from '../compute/compute.service.js';
 import { ConditionsService } from '../conditions/conditions.service.js';
 import { ApiException, badRequest } from '../http/api-error.js';
 import { LinksService } from '../links/links.service.js';
@@ -30,7 +31,10 @@ export interface PlanForLinkInput {
  * `POST /api/compute/plan` (SPEC §3): the pure plan of common/src/conditions/plan.ts with the
  * profile at the control point from the diurnal model, the latest feed update of the region
  * nearest the control point, or a stored profile the user may see.
- * Runs in the main thread (a 24-slot plan takes ~0.1–0.4 s here; see scripts/bench.mjs `plan`).
+ * The route's plan runs in the compute worker pool (ComputeService: time limit, result cache), as
+ * a 24-slot plan takes ~0.1–0.4 s (scripts/bench.mjs `plan`); the request is parsed and the link
+ * and profile source are resolved here first; the watch uses planForLinkInPool. planForLink, for
+ * the nets' schedule, still computes in the calling thread.
  */
 @Injectable()
 export class PlanService {
@@ -41,10 +45,11 @@ export class PlanService {
     private readonly stations: StationsRepository,
     private readonly profiles: ProfileLookup,
     private readonly conditions: ConditionsService,
+    private readonly compute: ComputeService,
   ) {}
 
-  /** The route: parse (400 naming the field), resolve the link, plan. */
-  planFromBody(body: unknown, user: UserView): PlanResponse {
+  /** The route: parse (400 naming the field), resolve the link, plan (in the worker pool). */
+  async planFromBody(body: unknown, user: UserView): Promise<PlanResponse> {
     const req = this.guard(() => parsePlanRequest(body));
     let from = req.from as GeoPoint | undefined;
     let to = req.to as GeoPoint | undefined;
@@ -61,17 +66,26 @@ export class PlanService {
       from = { latDeg: a.latDeg, lonDeg: a.lonDeg };
       to = { latDeg: b.latDeg, lonDeg: b.lonDeg };
     }
-    return this.planForLink(
-      {
-        from: from as GeoPoint,
-        to: to as GeoPoint,
-        dateUtc: req.dateUtc,
-        channelsKHz: req.channelsKHz,
-        profileSource: req.profileSource,
-        slotMinutes: req.slotMinutes,
-      },
-      user,
-    );
+    const ends = { from: from as GeoPoint, to: to as GeoPoint };
+    return this.compute.plan({
+      ...ends,
+      dateUtc: req.dateUtc,
+      channelsKHz: req.channelsKHz,
+      slotMinutes: req.slotMinutes,
+      profile: this.profileSourceFor(req.profileSource, ends.from, ends.to, user),
+    });
+  }
+
+  /** planForLink in the worker pool (time limit, cache): for background callers like the watch. */
+  planForLinkInPool(input: PlanForLinkInput, user?: UserView): Promise<PlanResponse> {
+    return this.compute.plan({
+      from: input.from,
+      to: input.to,
+      dateUtc: input.dateUtc,
+      channelsKHz: input.channelsKHz,
+      slotMinutes: input.slotMinutes ?? 60,
+      profile: this.profileSourceFor(input.profileSource, input.from, input.to, user),
+    });
   }
 
   /**
@@ -79,7 +93,11 @@ export class PlanService {
    * may be used; without one (the system) any live profile may.
    */
   planForLink(input: PlanForLinkInput, user?: UserView): PlanResponse {
-    const profileAt = this.profileSourceFor(input.profileSource, input.from, input.to, user);
+    const profile = this.profileSourceFor(input.profileSource, input.from, input.to, user);
+    const profileAt =
+      profile === 'model'
+        ? (at: Date, point: GeoPoint) => diurnalModel(point, at).profile
+        : () => profile;
     return this.guard(() =>
       computePlan({
         from: input.from,
@@ -92,13 +110,14 @@ export class PlanService {
     );
   }
 
+  /** `'model'` (the diurnal model per slot), or the feed's or a stored profile's data. */
   private profileSourceFor(
     source: PlanProfileSource,
     from: GeoPoint,
     to: GeoPoint,
     user: UserView | undefined,
-  ): (at: Date, controlPoint: GeoPoint) => ProfileData {
-    if (source === 'model') return (at, point) => diurnalModel(point, at).profile;
+  ): 'model' | ProfileData {
+    if (source === 'model') return 'model';
     if (source === 'feed') {
       const mid = pathGeometry(from, to).midpoint;
       const latest = this.conditions.latestFeedProfile(mid);
@@ -111,7 +130,7 @@ export class PlanService {
           },
         );
       }
-      return () => latest.profile;
+      return latest.profile;
     }
     const stored = user
       ? this.profiles.resolveForUser(source.profileId, user)
@@ -121,7 +140,7 @@ export class PlanService {
         'profileSource.profileId': `no profile with id ${source.profileId}`,
       });
     }
-    return () => stored;
+    return stored;
   }
 
   /** Physics/validation errors → the one error shape (400/422), never 500 for user input. */

@@ -43,7 +43,7 @@ export class ContractWatchSources extends WatchSources {
   }
 
   plan(request: WatchPlanRequest): Promise<PlanResponse> {
-    return Promise.resolve(this.planner.planForLink(request));
+    return this.planner.planForLinkInPool(request);
   }
 
   latestFeedProfile(point: GeoPoint) {
