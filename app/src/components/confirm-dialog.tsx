@@ -19,11 +19,13 @@ interface ConfirmDialogProps {
   confirmLabel: string;
   busy?: boolean;
   error?: string;
+  /** 'alert' (the default) for a destructive action; 'modal' for one that is not (publishing). */
+  modalType?: 'alert' | 'modal';
   onConfirm: () => void;
   onCancel: () => void;
 }
 
-/** An alert dialog that asks before a destructive action (delete), with the server's error if any. */
+/** A dialog that asks before an action (delete, publish), with the server's error if any. */
 export function ConfirmDialog({
   open,
   title,
@@ -31,11 +33,12 @@ export function ConfirmDialog({
   confirmLabel,
   busy = false,
   error,
+  modalType = 'alert',
   onConfirm,
   onCancel,
 }: ConfirmDialogProps) {
   return (
-    <Dialog modalType="alert" open={open} onOpenChange={(_, data) => !data.open && onCancel()}>
+    <Dialog modalType={modalType} open={open} onOpenChange={(_, data) => !data.open && onCancel()}>
       <DialogSurface>
         <DialogBody>
           <DialogTitle>{title}</DialogTitle>
@@ -63,5 +66,46 @@ export function ConfirmDialog({
         </DialogBody>
       </DialogSurface>
     </Dialog>
+  );
+}
+
+interface DeleteMutation {
+  isPending: boolean;
+  error: Error | null;
+  mutate: (id: number) => void;
+  reset: () => void;
+}
+
+interface DeleteConfirmDialogProps<T extends { id: number }> {
+  /** The item to delete; the dialog is open while there is one. */
+  item: T | undefined;
+  /** The delete mutation, called with the item's id. */
+  mutation: DeleteMutation;
+  title: string;
+  confirmLabel: string;
+  /** Clear `item`: on cancel, and from the mutation's onSuccess once deleted. */
+  onClose: () => void;
+  children: ReactNode;
+}
+
+/** Asks before deleting `item`; a cancel also forgets the last failed attempt. */
+export function DeleteConfirmDialog<T extends { id: number }>({
+  item,
+  mutation,
+  onClose,
+  ...rest
+}: DeleteConfirmDialogProps<T>) {
+  return (
+    <ConfirmDialog
+      {...rest}
+      open={item !== undefined}
+      busy={mutation.isPending}
+      error={mutation.error?.message}
+      onConfirm={() => item && mutation.mutate(item.id)}
+      onCancel={() => {
+        onClose();
+        mutation.reset();
+      }}
+    />
   );
 }

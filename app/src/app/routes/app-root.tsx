@@ -1,15 +1,9 @@
-import {
-  Button,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
-  makeStyles,
-} from '@fluentui/react-components';
+import { makeStyles } from '@fluentui/react-components';
 import { useState } from 'react';
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { FullPageSpinner } from '@/components/full-page-spinner';
 import { AppShell } from '@/components/layouts/app-shell';
+import { QueryErrorBar } from '@/components/query-state-boundary';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/api/get-user';
 import { useLogout } from '@/features/auth/api/logout';
@@ -40,15 +34,11 @@ export default function AppRoot() {
   if (user.isError) {
     return (
       <div className={styles.center}>
-        <MessageBar intent="error" layout="multiline" role="alert">
-          <MessageBarBody>
-            <MessageBarTitle>Could not load your account</MessageBarTitle>
-            {user.error.message}
-          </MessageBarBody>
-          <MessageBarActions>
-            <Button onClick={() => void user.refetch()}>Try again</Button>
-          </MessageBarActions>
-        </MessageBar>
+        <QueryErrorBar
+          title="Could not load your account"
+          error={user.error}
+          onRetry={() => void user.refetch()}
+        />
       </div>
     );
   }

@@ -1,27 +1,16 @@
-import {
-  Body1,
-  Button,
-  Field,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
-  Select,
-  Spinner,
-  Subtitle1,
-  makeStyles,
-  tokens,
-} from '@fluentui/react-components';
+import { Body1, Field, Select, Subtitle1, makeStyles, tokens } from '@fluentui/react-components';
 import { ArrowLeft20Regular } from '@fluentui/react-icons';
 import { useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import { LinkButton } from '@/components/link-button';
 import { PageHeader } from '@/components/page-header';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { paths } from '@/config/paths';
 import { useLink } from '@/features/links/api/get-link';
 import { useLinks } from '@/features/links/api/get-links';
 import { StudiesTable } from '@/features/studies/components/studies-table';
 import { StudyWorkspace } from '@/features/studies/components/study-workspace';
 import { isApiError } from '@/lib/api-client';
+import type { HfLink } from '@/types/links';
 import { formatBearing, formatKm, formatLatLon } from '@/utils/format-geo';
 
 const useStyles = makeStyles({
@@ -64,79 +53,67 @@ export default function LinkStudyRoute() {
     />
   );
 
-  if (link.isPending) {
-    return (
-      <>
-        {header}
-        <Spinner label="Loading the link…" />
-      </>
-    );
-  }
-  if (link.isError) {
-    return (
-      <>
-        {header}
-        <MessageBar intent="error" layout="multiline" role="alert">
-          <MessageBarBody>
-            <MessageBarTitle>
-              {isApiError(link.error) && link.error.status === 404
-                ? 'There is no link with this number that you can see'
-                : 'Could not load the link'}
-            </MessageBarTitle>
-            {link.error.message}
-          </MessageBarBody>
-          <MessageBarActions>
-            <Button onClick={() => void link.refetch()}>Try again</Button>
-          </MessageBarActions>
-        </MessageBar>
-      </>
-    );
-  }
+  const study = (current: HfLink) => {
+    const linkItems = links.data?.items ?? [current];
 
-  const current = link.data;
-  const linkItems = links.data?.items ?? [current];
+    return (
+      <>
+        <div className={styles.bar}>
+          <Field label="Link">
+            <Select
+              value={String(current.id)}
+              onChange={(_, data) => navigate(paths.linkStudy.getHref(data.value))}
+            >
+              {linkItems.map((l) => (
+                <option key={l.id} value={String(l.id)}>
+                  {l.name}
+                </option>
+              ))}
+            </Select>
+          </Field>
+          <Body1 className={styles.facts}>
+            {current.fromStation.name} → {current.toStation.name} · {formatKm(current.distanceKm)} ·
+            bearing {formatBearing(current.bearingDeg)} · control point{' '}
+            {formatLatLon(current.midpoint.latDeg, current.midpoint.lonDeg)}
+          </Body1>
+        </div>
+        <StudyWorkspace
+          key={current.id}
+          link={current}
+          studyId={studyId}
+          onSaved={(id) => navigate(paths.linkStudy.getHref(current.id, id), { replace: true })}
+        />
+        <section className={styles.section} aria-labelledby="studies-heading">
+          <Subtitle1 as="h2" id="studies-heading" className={styles.heading}>
+            Saved studies
+          </Subtitle1>
+          <StudiesTable
+            links={linkItems}
+            initialLinkId={current.id}
+            onOpen={(study) => navigate(paths.linkStudy.getHref(study.linkId, study.id))}
+            onDeleted={(id) => {
+              if (id === studyId) navigate(paths.linkStudy.getHref(current.id), { replace: true });
+            }}
+          />
+        </section>
+      </>
+    );
+  };
 
   return (
     <>
       {header}
-      <div className={styles.bar}>
-        <Field label="Link">
-          <Select
-            value={String(current.id)}
-            onChange={(_, data) => navigate(paths.linkStudy.getHref(data.value))}
-          >
-            {linkItems.map((l) => (
-              <option key={l.id} value={String(l.id)}>
-                {l.name}
-              </option>
-            ))}
-          </Select>
-        </Field>
-        <Body1 className={styles.facts}>
-          {current.fromStation.name} → {current.toStation.name} · {formatKm(current.distanceKm)} ·
-          bearing {formatBearing(current.bearingDeg)} · control point{' '}
-          {formatLatLon(current.midpoint.latDeg, current.midpoint.lonDeg)}
-        </Body1>
-      </div>
-      <StudyWorkspace
-        key={current.id}
-        link={current}
-        studyId={studyId}
-        onSaved={(id) => navigate(paths.linkStudy.getHref(current.id, id), { replace: true })}
-      />
-      <section className={styles.section} aria-labelledby="studies-heading">
-        <Subtitle1 as="h2" id="studies-heading" className={styles.heading}>
-          Saved studies
-        </Subtitle1>
-        <StudiesTable
-          links={linkItems}
-          initialLinkId={current.id}
-          onOpen={(study) => navigate(paths.linkStudy.getHref(study.linkId, study.id))}
-          onDeleted={(id) => {
-            if (id === studyId) navigate(paths.linkStudy.getHref(current.id), { replace: true });
-          }}
-        />
-      </section>
+      <QueryStateBoundary
+        query={link}
+        loadingLabel="Loading the link…"
+        errorTitle={
+          isApiError(link.error) && link.error.status === 404
+            ? 'There is no link with this number that you can see'
+            : 'Could not load the link'
+        }
+      >
+        {study}
+      </QueryStateBoundary>
     </>
   );
 }

@@ -1,15 +1,7 @@
-import {
-  Button,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
-  Spinner,
-  makeStyles,
-  tokens,
-} from '@fluentui/react-components';
+import { Spinner, makeStyles, tokens } from '@fluentui/react-components';
 import { useState } from 'react';
 import { PageHeader } from '@/components/page-header';
+import { QueryErrorBar } from '@/components/query-state-boundary';
 import { useThemeModeContext } from '@/components/theme/theme-mode-context';
 import { useUser } from '@/features/auth/api/get-user';
 import { useLinks } from '@/features/links/api/get-links';
@@ -27,6 +19,7 @@ import {
 import type { Station } from '@/types/links';
 
 const useStyles = makeStyles({
+  error: { marginBottom: '12px' },
   layout: {
     display: 'grid',
     gridTemplateColumns: 'minmax(0, 1fr) 320px',
@@ -81,22 +74,15 @@ export default function MapRoute() {
         description="Your stations and the great-circle paths of your links, with each path's control point and today's night side. The basemap ships with Hopwise: no tile server is needed."
       />
       {failed && (
-        <MessageBar intent="error" layout="multiline" role="alert" style={{ marginBottom: 12 }}>
-          <MessageBarBody>
-            <MessageBarTitle>Could not load your stations and links</MessageBarTitle>
-            {failed.message}
-          </MessageBarBody>
-          <MessageBarActions>
-            <Button
-              onClick={() => {
-                void stations.refetch();
-                void links.refetch();
-              }}
-            >
-              Try again
-            </Button>
-          </MessageBarActions>
-        </MessageBar>
+        <QueryErrorBar
+          className={styles.error}
+          title="Could not load your stations and links"
+          error={failed}
+          onRetry={() => {
+            void stations.refetch();
+            void links.refetch();
+          }}
+        />
       )}
       <div className={styles.layout}>
         <div className={styles.mapFrame} role="region" aria-label="World map of stations and links">

@@ -3,12 +3,7 @@ import {
   Button,
   Caption1,
   Field,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
   Select,
-  Spinner,
   Table,
   TableBody,
   TableCell,
@@ -18,10 +13,12 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import type { AuditEntryView } from '@hopwise/common';
+import type { AuditEntryView, ListResponse } from '@hopwise/common';
 import { useState } from 'react';
+import { useTableStyles } from '@/components/data-table/table-styles';
+import { TimeCell } from '@/components/data-table/time-cell';
 import { EmptyState } from '@/components/empty-state';
-import { formatUtcAndLocal } from '@/utils/format-time';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { useAudit } from '../api/get-audit';
 
 const PAGE_SIZE = 50;
@@ -39,26 +36,11 @@ const ACTION_FILTERS = [
 ] as const;
 
 const useStyles = makeStyles({
-  toolbar: {
-    display: 'flex',
-    alignItems: 'end',
-    gap: tokens.spacingHorizontalL,
-    marginBottom: tokens.spacingVerticalM,
-  },
-  wrapper: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   table: { minWidth: '820px' },
   timeColumn: { width: '230px' },
   actionColumn: { width: '180px' },
   targetColumn: { width: '140px' },
-  muted: { color: tokens.colorNeutralForeground3 },
-  stack: { display: 'flex', flexDirection: 'column' },
   code: { fontFamily: tokens.fontFamilyMonospace },
-  loading: { padding: tokens.spacingVerticalXXL },
   pager: {
     display: 'flex',
     alignItems: 'center',
@@ -75,12 +57,13 @@ function actorOf(entry: AuditEntryView): { name: string; email: string | null } 
 /** The audit log: who changed what and when (UTC with local time beside), newest first. */
 export function AuditTable() {
   const styles = useStyles();
+  const table = useTableStyles();
   const [action, setAction] = useState('');
   const [offset, setOffset] = useState(0);
   const audit = useAudit({ limit: PAGE_SIZE, offset, action: action || undefined });
 
   const toolbar = (
-    <div className={styles.toolbar}>
+    <div className={table.toolbar}>
       <Field label="Show">
         <Select
           value={action}
@@ -99,99 +82,86 @@ export function AuditTable() {
     </div>
   );
 
-  if (audit.isPending) {
-    return (
-      <>
-        {toolbar}
-        <Spinner className={styles.loading} label="Loading the audit log…" />
-      </>
-    );
-  }
-  if (audit.isError) {
-    return (
-      <>
-        {toolbar}
-        <MessageBar intent="error" layout="multiline" role="alert">
-          <MessageBarBody>
-            <MessageBarTitle>Could not load the audit log</MessageBarTitle>
-            {audit.error.message}
-          </MessageBarBody>
-          <MessageBarActions>
-            <Button onClick={() => void audit.refetch()}>Try again</Button>
-          </MessageBarActions>
-        </MessageBar>
-      </>
-    );
-  }
+  const list = ({ items, total }: ListResponse<AuditEntryView>) => {
+    const first = total === 0 ? 0 : offset + 1;
+    const last = offset + items.length;
 
-  const { items, total } = audit.data;
-  const first = total === 0 ? 0 : offset + 1;
-  const last = offset + items.length;
+    return (
+      <>
+        {items.length === 0 ? (
+          <EmptyState title="Nothing recorded">No changes match this filter yet.</EmptyState>
+        ) : (
+          <div className={table.wrapper}>
+            <Table className={styles.table} aria-label="Audit log">
+              <TableHeader>
+                <TableRow>
+                  <TableHeaderCell className={styles.timeColumn}>Time</TableHeaderCell>
+                  <TableHeaderCell>Actor</TableHeaderCell>
+                  <TableHeaderCell className={styles.actionColumn}>Action</TableHeaderCell>
+                  <TableHeaderCell className={styles.targetColumn}>Target</TableHeaderCell>
+                </TableRow>
+              </TableHeader>
+              <TableBody>
+                {items.map((entry) => {
+                  const actor = actorOf(entry);
+                  return (
+                    <TableRow key={entry.id}>
+                      <TableCell>
+                        <TimeCell iso={entry.at} />
+                      </TableCell>
+                      <TableCell>
+                        <div className={table.stack}>
+                          <Body1>{actor.name}</Body1>
+                          {actor.email && (
+                            <Caption1 className={table.muted}>{actor.email}</Caption1>
+                          )}
+                        </div>
+                      </TableCell>
+                      <TableCell>
+                        <span className={styles.code}>{entry.action}</span>
+                      </TableCell>
+                      <TableCell>
+                        <span className={styles.code}>{entry.target}</span>
+                      </TableCell>
+                    </TableRow>
+                  );
+                })}
+              </TableBody>
+            </Table>
+          </div>
+        )}
+        <nav className={styles.pager} aria-label="Audit log pages">
+          <Button
+            disabled={offset === 0 || audit.isFetching}
+            onClick={() => setOffset(Math.max(0, offset - PAGE_SIZE))}
+          >
+            Newer
+          </Button>
+          <Button
+            disabled={last >= total || audit.isFetching}
+            onClick={() => setOffset(offset + PAGE_SIZE)}
+          >
+            Older
+          </Button>
+          <Caption1 className={table.muted} aria-live="polite">
+            {total === 0 ? 'No entries' : `Entries ${first}–${last} of ${total}`}
+          </Caption1>
+        </nav>
+      </>
+    );
+  };
 
   return (
     <>
       {toolbar}
-      {items.length === 0 ? (
-        <EmptyState title="Nothing recorded">No changes match this filter yet.</EmptyState>
-      ) : (
-        <div className={styles.wrapper}>
-          <Table className={styles.table} aria-label="Audit log">
-            <TableHeader>
-              <TableRow>
-                <TableHeaderCell className={styles.timeColumn}>Time</TableHeaderCell>
-                <TableHeaderCell>Actor</TableHeaderCell>
-                <TableHeaderCell className={styles.actionColumn}>Action</TableHeaderCell>
-                <TableHeaderCell className={styles.targetColumn}>Target</TableHeaderCell>
-              </TableRow>
-            </TableHeader>
-            <TableBody>
-              {items.map((entry) => {
-                const at = formatUtcAndLocal(entry.at);
-                const actor = actorOf(entry);
-                return (
-                  <TableRow key={entry.id}>
-                    <TableCell>
-                      <div className={styles.stack}>
-                        <Body1>{at.utc}</Body1>
-                        <Caption1 className={styles.muted}>{at.localShort} local</Caption1>
-                      </div>
-                    </TableCell>
-                    <TableCell>
-                      <div className={styles.stack}>
-                        <Body1>{actor.name}</Body1>
-                        {actor.email && <Caption1 className={styles.muted}>{actor.email}</Caption1>}
-                      </div>
-                    </TableCell>
-                    <TableCell>
-                      <span className={styles.code}>{entry.action}</span>
-                    </TableCell>
-                    <TableCell>
-                      <span className={styles.code}>{entry.target}</span>
-                    </TableCell>
-                  </TableRow>
-                );
-              })}
-            </TableBody>
-          </Table>
-        </div>
-      )}
-      <nav className={styles.pager} aria-label="Audit log pages">
-        <Button
-          disabled={offset === 0 || audit.isFetching}
-          onClick={() => setOffset(Math.max(0, offset - PAGE_SIZE))}
-        >
-          Newer
-        </Button>
-        <Button
-          disabled={last >= total || audit.isFetching}
-          onClick={() => setOffset(offset + PAGE_SIZE)}
-        >
-          Older
-        </Button>
-        <Caption1 className={styles.muted} aria-live="polite">
-          {total === 0 ? 'No entries' : `Entries ${first}–${last} of ${total}`}
-        </Caption1>
-      </nav>
+      <QueryStateBoundary
+        query={audit}
+        loadingLabel="Loading the audit log…"
+        errorTitle="Could not load the audit log"
+        padSpinner
+      >
+        {list}
+      </QueryStateBoundary>
     </>
   );
 }

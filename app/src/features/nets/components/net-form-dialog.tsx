@@ -1,31 +1,14 @@
 import type { NetView, StationView } from '@hopwise/common';
-import {
-  Button,
-  Checkbox,
-  Dialog,
-  DialogActions,
-  DialogBody,
-  DialogContent,
-  DialogSurface,
-  DialogTitle,
-  Field,
-  Input,
-  MessageBar,
-  MessageBarBody,
-  Select,
-  Spinner,
-  makeStyles,
-  tokens,
-} from '@fluentui/react-components';
-import { useState, type FormEvent } from 'react';
+import { Checkbox, Field, Input, Select, makeStyles, tokens } from '@fluentui/react-components';
+import { useState } from 'react';
+import { FormDialog } from '@/components/form-dialog';
+import { useFormErrors, type FieldErrors } from '@/hooks/use-form-errors';
 import { useNotify } from '@/hooks/use-notify';
-import { isApiError } from '@/lib/api-client';
 import { useCreateNet } from '../api/create-net';
 import { useUpdateNet } from '../api/update-net';
 import { parseChannelsKHz } from './channels';
 
 const useStyles = makeStyles({
-  form: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
   members: {
     display: 'flex',
     flexDirection: 'column',
@@ -44,7 +27,7 @@ interface Values {
   channels: string;
 }
 type FieldName = 'name' | 'controlStationId' | 'memberStationIds' | 'channelsKHz';
-type FieldErrors = Partial<Record<FieldName, string>>;
+const FIELD_NAMES: FieldName[] = ['name', 'controlStationId', 'memberStationIds', 'channelsKHz'];
 
 interface NetFormDialogProps {
   open: boolean;
@@ -68,7 +51,6 @@ function NetForm({ open, onOpenChange, stations, net }: NetFormDialogProps) {
     memberStationIds: net?.memberStationIds ?? [],
     channels: net?.channelsKHz.join(', ') ?? '',
   }));
-  const [errors, setErrors] = useState<FieldErrors>({});
   const done = (saved: NetView) => {
     notify('success', net ? 'Net updated' : 'Net created', saved.name);
     onOpenChange(false);
@@ -76,22 +58,18 @@ function NetForm({ open, onOpenChange, stations, net }: NetFormDialogProps) {
   const create = useCreateNet({ onSuccess: done });
   const update = useUpdateNet({ onSuccess: done });
   const mutation = net ? update : create;
-  const serverFields = isApiError(mutation.error) ? mutation.error.fields : undefined;
-  const serverMessage = (name: FieldName) =>
-    Object.entries(serverFields ?? {}).find(([k]) => k === name || k.startsWith(`${name}[`))?.[1];
-  const namesAField = (
-    ['name', 'controlStationId', 'memberStationIds', 'channelsKHz'] as const
-  ).some((n) => serverMessage(n));
-  const formError = mutation.error && !namesAField ? mutation.error.message : undefined;
+  const { setErrors, clearError, formError, fieldProps } = useFormErrors(
+    FIELD_NAMES,
+    mutation.error,
+  );
 
   const set = <K extends keyof Values>(key: K, value: Values[K], field: FieldName) => {
     setValues((v) => ({ ...v, [key]: value }));
-    setErrors((e) => ({ ...e, [field]: undefined }));
+    clearError(field);
   };
 
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
-    const found: FieldErrors = {};
+  const onSubmit = () => {
+    const found: FieldErrors<FieldName> = {};
     if (!values.name.trim()) found.name = 'Enter a name for the net.';
     if (!values.controlStationId) found.controlStationId = 'Choose the control station.';
     const members = values.memberStationIds.filter((id) => String(id) !== values.controlStationId);
@@ -110,94 +88,70 @@ function NetForm({ open, onOpenChange, stations, net }: NetFormDialogProps) {
     else create.mutate(input);
   };
 
-  const message = (name: FieldName) => errors[name] ?? serverMessage(name);
-  const fieldProps = (name: FieldName) => ({
-    validationMessage: message(name),
-    validationState: message(name) ? ('error' as const) : ('none' as const),
-  });
   const options = [...stations].sort((a, b) => a.name.localeCompare(b.name));
   const label = (s: StationView) => (s.callSign ? `${s.name} (${s.callSign})` : s.name);
 
   return (
-    <Dialog open={open} onOpenChange={(_, data) => onOpenChange(data.open)}>
-      <DialogSurface aria-describedby={undefined}>
-        <form onSubmit={onSubmit} noValidate>
-          <DialogBody>
-            <DialogTitle>{net ? `Edit ${net.name}` : 'Create a net'}</DialogTitle>
-            <DialogContent className={styles.form}>
-              {formError && (
-                <MessageBar intent="error" role="alert">
-                  <MessageBarBody>{formError}</MessageBarBody>
-                </MessageBar>
-              )}
-              <Field label="Name" required {...fieldProps('name')}>
-                <Input value={values.name} onChange={(_, d) => set('name', d.value, 'name')} />
-              </Field>
-              <Field label="Control station" required {...fieldProps('controlStationId')}>
-                <Select
-                  value={values.controlStationId}
-                  onChange={(_, d) => set('controlStationId', d.value, 'controlStationId')}
-                >
-                  <option value="">Choose a station…</option>
-                  {options.map((s) => (
-                    <option key={s.id} value={String(s.id)}>
-                      {label(s)}
-                    </option>
-                  ))}
-                </Select>
-              </Field>
-              <Field label="Member stations (at least one)" {...fieldProps('memberStationIds')}>
-                <div className={styles.members} role="group" aria-label="Member stations">
-                  {options
-                    .filter((s) => String(s.id) !== values.controlStationId)
-                    .map((s) => (
-                      <Checkbox
-                        key={s.id}
-                        label={label(s)}
-                        checked={values.memberStationIds.includes(s.id)}
-                        onChange={(_, d) =>
-                          set(
-                            'memberStationIds',
-                            d.checked
-                              ? [...values.memberStationIds, s.id]
-                              : values.memberStationIds.filter((id) => id !== s.id),
-                            'memberStationIds',
-                          )
-                        }
-                      />
-                    ))}
-                </div>
-              </Field>
-              <Field
-                label="Assigned channels (kHz)"
-                required
-                hint="Whole kHz from 3000 to 30000, separated by commas or spaces. Use only channels your licence or assignment allows."
-                {...fieldProps('channelsKHz')}
-              >
-                <Input
-                  value={values.channels}
-                  inputMode="numeric"
-                  placeholder="4625, 6998, 9145"
-                  onChange={(_, d) => set('channels', d.value, 'channelsKHz')}
-                />
-              </Field>
-            </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={() => onOpenChange(false)}>
-                Cancel
-              </Button>
-              <Button
-                appearance="primary"
-                type="submit"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" /> : undefined}
-              >
-                {net ? 'Save' : 'Create net'}
-              </Button>
-            </DialogActions>
-          </DialogBody>
-        </form>
-      </DialogSurface>
-    </Dialog>
+    <FormDialog
+      open={open}
+      onOpenChange={onOpenChange}
+      title={net ? `Edit ${net.name}` : 'Create a net'}
+      onSubmit={onSubmit}
+      submitLabel={net ? 'Save' : 'Create net'}
+      pending={mutation.isPending}
+      error={formError}
+    >
+      <Field label="Name" required {...fieldProps('name')}>
+        <Input value={values.name} onChange={(_, d) => set('name', d.value, 'name')} />
+      </Field>
+      <Field label="Control station" required {...fieldProps('controlStationId')}>
+        <Select
+          value={values.controlStationId}
+          onChange={(_, d) => set('controlStationId', d.value, 'controlStationId')}
+        >
+          <option value="">Choose a station…</option>
+          {options.map((s) => (
+            <option key={s.id} value={String(s.id)}>
+              {label(s)}
+            </option>
+          ))}
+        </Select>
+      </Field>
+      <Field label="Member stations (at least one)" {...fieldProps('memberStationIds')}>
+        <div className={styles.members} role="group" aria-label="Member stations">
+          {options
+            .filter((s) => String(s.id) !== values.controlStationId)
+            .map((s) => (
+              <Checkbox
+                key={s.id}
+                label={label(s)}
+                checked={values.memberStationIds.includes(s.id)}
+                onChange={(_, d) =>
+                  set(
+                    'memberStationIds',
+                    d.checked
+                      ? [...values.memberStationIds, s.id]
+                      : values.memberStationIds.filter((id) => id !== s.id),
+                    'memberStationIds',
+                  )
+                }
+              />
+            ))}
+        </div>
+      </Field>
+      <Field
+        label="Assigned channels (kHz)"
+        required
+        hint="Whole kHz from 3000 to 30000, separated by commas or spaces. Use only channels your licence or assignment allows."
+        {...fieldProps('channelsKHz')}
+      >
+        <Input
+          value={values.channels}
+          inputMode="numeric"
+          placeholder="4625, 6998, 9145"
+          onChange={(_, d) => set('channels', d.value, 'channelsKHz')}
+        />
+      </Field>
+    </FormDialog>
   );
 }

@@ -15,13 +15,13 @@ import {
 } from '@fluentui/react-components';
 import { DateTime } from 'luxon';
 import { useState } from 'react';
+import { ConfirmDialog } from '@/components/confirm-dialog';
 import { useNotify } from '@/hooks/use-notify';
 import { formatUtcAndLocal } from '@/utils/format-time';
 import { exportSchedule } from '../api/export-schedule';
 import { useNetSchedule, type ScheduleSourceChoice } from '../api/get-net-schedule';
 import { usePublishSchedule } from '../api/publish-schedule';
 import { useSaveOverrides } from '../api/save-overrides';
-import { PublishDialog } from './publish-dialog';
 import { ScheduleGrid } from './schedule-grid';
 
 const useStyles = makeStyles({
@@ -162,16 +162,18 @@ export function NetSchedulePanel({ net }: { net: NetView }) {
           <MessageBarBody>The net controller has not published a schedule yet.</MessageBarBody>
         </MessageBar>
       )}
-      <PublishDialog
+      <ConfirmDialog
+        modalType="modal"
         open={confirming}
         title={`Publish the schedule for ${dateUtc}?`}
+        confirmLabel="Publish"
         busy={publish.isPending}
         error={publish.error?.message}
-        onPublish={() => publish.mutate({ netId: net.id, dateUtc, profileSource })}
+        onConfirm={() => publish.mutate({ netId: net.id, dateUtc, profileSource })}
         onCancel={() => setConfirming(false)}
       >
         Members will see this as a new version and be told when the band moves under it. {SAFETY}
-      </PublishDialog>
+      </ConfirmDialog>
     </section>
   );
 }

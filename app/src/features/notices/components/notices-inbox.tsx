@@ -4,21 +4,19 @@ import {
   Button,
   Caption1,
   MessageBar,
-  MessageBarActions,
   MessageBarBody,
-  MessageBarTitle,
-  Spinner,
   Subtitle2,
   makeStyles,
   mergeClasses,
   tokens,
 } from '@fluentui/react-components';
 import { Alert24Regular, CheckmarkCircle20Regular } from '@fluentui/react-icons';
-import type { NoticeView } from '@hopwise/common';
+import type { NoticeListResponse, NoticeView } from '@hopwise/common';
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/empty-state';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { formatUtcAndLocal } from '@/utils/format-time';
 import { useNotices } from '../api/get-notices';
 import { getUnreadCountQueryOptions } from '../api/get-unread-count';
@@ -143,33 +141,7 @@ export function NoticesInbox() {
     }
   }, [queryClient, unreadNow]);
 
-  if (notices.isPending) return <Spinner label="Loading notices…" />;
-  if (notices.isError) {
-    return (
-      <MessageBar intent="error" layout="multiline" role="alert">
-        <MessageBarBody>
-          <MessageBarTitle>Could not load your notices</MessageBarTitle>
-          {notices.error.message}
-        </MessageBarBody>
-        <MessageBarActions>
-          <Button onClick={() => void notices.refetch()}>Try again</Button>
-        </MessageBarActions>
-      </MessageBar>
-    );
-  }
-
-  const { items, total, unread } = notices.data;
-  if (total === 0) {
-    return (
-      <EmptyState icon={<Alert24Regular />} title="No notices yet">
-        Hopwise tells you here when the channel in force on a published net schedule you belong to,
-        or on a link you follow, rises above the MUF, when the best channel changes, or when a mode
-        appears or disappears.
-      </EmptyState>
-    );
-  }
-
-  return (
+  const list = ({ items, total, unread }: NoticeListResponse) => (
     <section aria-label="Notices">
       <div className={styles.toolbar}>
         <Body1 aria-live="polite">
@@ -207,5 +179,23 @@ export function NoticesInbox() {
         </nav>
       )}
     </section>
+  );
+
+  return (
+    <QueryStateBoundary
+      query={notices}
+      loadingLabel="Loading notices…"
+      errorTitle="Could not load your notices"
+      empty={
+        <EmptyState icon={<Alert24Regular />} title="No notices yet">
+          Hopwise tells you here when the channel in force on a published net schedule you belong
+          to, or on a link you follow, rises above the MUF, when the best channel changes, or when a
+          mode appears or disappears.
+        </EmptyState>
+      }
+      isEmpty={(data) => data.total === 0}
+    >
+      {list}
+    </QueryStateBoundary>
   );
 }

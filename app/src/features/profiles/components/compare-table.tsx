@@ -9,17 +9,12 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
+import { useTableStyles } from '@/components/data-table/table-styles';
 import type { CompareItem } from '../api/types';
 import { fixed, signedDifference } from '../utils/format';
 import { seriesColor } from './chart-colors';
 
 const useStyles = makeStyles({
-  wrap: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   numeric: { fontVariantNumeric: 'tabular-nums' },
   cell: { display: 'flex', flexDirection: 'column', paddingBlock: tokens.spacingVerticalXS },
   delta: { color: tokens.colorNeutralForeground3 },
@@ -73,9 +68,10 @@ export function CompareTable({
   frequencyMHz: number;
 }) {
   const styles = useStyles();
+  const table = useTableStyles();
   const [reference] = items;
   return (
-    <div className={styles.wrap}>
+    <div className={table.wrapper}>
       <Table aria-label="Differences between the profiles" size="small">
         <TableHeader>
           <TableRow>

@@ -14,10 +14,12 @@ import {
   TableHeaderCell,
   TableRow,
   makeStyles,
+  mergeClasses,
   tokens,
 } from '@fluentui/react-components';
 import type { ReactNode } from 'react';
 import { useNavigate } from 'react-router-dom';
+import { useTableStyles } from '@/components/data-table/table-styles';
 import { LinkButton } from '@/components/link-button';
 import { PageHeader } from '@/components/page-header';
 import { paths } from '@/config/paths';
@@ -37,13 +39,7 @@ const useStyles = makeStyles({
   stack: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
   actions: { display: 'flex', flexWrap: 'wrap', gap: tokens.spacingHorizontalS },
   section: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
-  tableWrap: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-    maxWidth: '760px',
-  },
+  tableWrap: { maxWidth: '760px' },
   muted: { color: tokens.colorNeutralForeground3 },
 });
 
@@ -66,6 +62,7 @@ function describeLocation(latDeg: number | null, lonDeg: number | null): string 
 /** One profile: its figures, N(h) and synthetic ionogram, its layers, and what can be done with it. */
 export function ProfileDetail({ id, currentUserId, canPublish, isAdmin, nav }: ProfileDetailProps) {
   const styles = useStyles();
+  const table = useTableStyles();
   const notify = useNotify();
   const navigate = useNavigate();
   const query = useProfile(id);
@@ -160,7 +157,7 @@ export function ProfileDetail({ id, currentUserId, canPublish, isAdmin, nav }: P
       {layers && (
         <section className={styles.section} aria-label="Layers">
           <Subtitle2 as="h2">Layers</Subtitle2>
-          <div className={styles.tableWrap}>
+          <div className={mergeClasses(table.wrapper, styles.tableWrap)}>
             <Table aria-label="Layers of this profile" size="small">
               <TableHeader>
                 <TableRow>

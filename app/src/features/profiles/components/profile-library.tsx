@@ -6,12 +6,7 @@ import {
   Checkbox,
   Field,
   Link,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
   Select,
-  Spinner,
   Switch,
   Table,
   TableBody,
@@ -23,9 +18,13 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import { DataArea24Regular } from '@fluentui/react-icons';
+import type { ListResponse } from '@hopwise/common';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
+import { useTableStyles } from '@/components/data-table/table-styles';
+import { TimeCell } from '@/components/data-table/time-cell';
 import { EmptyState } from '@/components/empty-state';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { paths } from '@/config/paths';
 import { useNotify } from '@/hooks/use-notify';
 import { useDeleteProfile } from '../api/delete-profile';
@@ -35,7 +34,6 @@ import type { ProfileRow } from '../api/types';
 import { fixed } from '../utils/format';
 import { SOURCE_FILTERS, sourceLabel } from '../utils/source-labels';
 import { ProfileRowActions } from './profile-row-actions';
-import { TimeCell } from './time-cell';
 
 const PAGE_SIZE = 20;
 const MAX_COMPARE = 4;
@@ -49,12 +47,6 @@ const useStyles = makeStyles({
     marginBottom: tokens.spacingVerticalL,
   },
   select: { minWidth: '190px' },
-  wrapper: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   // Fluent's table lays out with fixed column widths (plus cell padding): every column but the
   // name gets one, and the name takes what is left.
   table: { minWidth: '1040px' },
@@ -75,8 +67,6 @@ const useStyles = makeStyles({
     marginTop: tokens.spacingVerticalM,
   },
   pager: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
-  muted: { color: tokens.colorNeutralForeground3 },
-  loading: { padding: tokens.spacingVerticalXXL },
 });
 
 type PublishedFilter = 'any' | 'yes' | 'no';
@@ -96,6 +86,7 @@ export function ProfileLibrary({
   isAdmin,
 }: ProfileLibraryProps) {
   const styles = useStyles();
+  const table = useTableStyles();
   const notify = useNotify();
   const navigate = useNavigate();
   const [source, setSource] = useState('');
@@ -188,170 +179,159 @@ export function ProfileLibrary({
     </div>
   );
 
-  if (profiles.isPending) {
-    return (
-      <>
-        {filters}
-        <Spinner className={styles.loading} label="Loading profiles…" />
-      </>
-    );
-  }
-  if (profiles.isError) {
-    return (
-      <>
-        {filters}
-        <MessageBar intent="error" layout="multiline" role="alert">
-          <MessageBarBody>
-            <MessageBarTitle>Could not load profiles</MessageBarTitle>
-            {profiles.error.message}
-          </MessageBarBody>
-          <MessageBarActions>
-            <Button onClick={() => void profiles.refetch()}>Try again</Button>
-          </MessageBarActions>
-        </MessageBar>
-      </>
-    );
-  }
-
-  const { items, total } = profiles.data;
-  if (items.length === 0) {
-    return (
-      <>
-        {filters}
-        <EmptyState icon={<DataArea24Regular />} title="No profiles match">
-          {source || mine || published !== 'any'
-            ? 'Change the filters to see more of the library.'
-            : canWrite
-              ? 'Build one from layer parameters, upload samples, or invert a sounding trace.'
-              : 'Published profiles will be listed here.'}
-        </EmptyState>
-      </>
-    );
-  }
-
   const busyId = publish.isPending
     ? publish.variables?.id
     : remove.isPending
       ? remove.variables
       : undefined;
-  const first = page * PAGE_SIZE + 1;
-  const last = page * PAGE_SIZE + items.length;
+
+  const list = ({ items, total }: ListResponse<ProfileRow>) => {
+    const first = page * PAGE_SIZE + 1;
+    const last = page * PAGE_SIZE + items.length;
+
+    return (
+      <>
+        <div className={table.wrapper}>
+          <Table className={styles.table} aria-label="Profile library">
+            <TableHeader>
+              <TableRow>
+                <TableHeaderCell className={styles.pickColumn} aria-label="Pick to compare" />
+                <TableHeaderCell>Name</TableHeaderCell>
+                <TableHeaderCell className={styles.sourceColumn}>Source</TableHeaderCell>
+                <TableHeaderCell className={styles.timeColumn}>Valid at</TableHeaderCell>
+                <TableHeaderCell className={styles.numberColumn}>foE (MHz)</TableHeaderCell>
+                <TableHeaderCell className={styles.numberColumn}>foF2 (MHz)</TableHeaderCell>
+                <TableHeaderCell className={styles.numberColumn}>hmF2 (km)</TableHeaderCell>
+                <TableHeaderCell className={styles.numberColumn}>TEC (TECU)</TableHeaderCell>
+                <TableHeaderCell className={styles.publishedColumn}>Published</TableHeaderCell>
+                <TableHeaderCell className={styles.ownerColumn}>Owner</TableHeaderCell>
+                <TableHeaderCell className={styles.actionsColumn}>Actions</TableHeaderCell>
+              </TableRow>
+            </TableHeader>
+            <TableBody>
+              {items.map((profile: ProfileRow) => {
+                const own = profile.ownerId === currentUserId;
+                return (
+                  <TableRow key={profile.id}>
+                    <TableCell>
+                      <Checkbox
+                        aria-label={`Pick ${profile.name} for comparison`}
+                        checked={picked.includes(profile.id)}
+                        onChange={(_, data) => togglePick(profile.id, data.checked === true)}
+                      />
+                    </TableCell>
+                    <TableCell>
+                      <Link
+                        as="a"
+                        href={paths.profileDetail.getHref(profile.id)}
+                        onClick={(e) => {
+                          e.preventDefault();
+                          navigate(paths.profileDetail.getHref(profile.id));
+                        }}
+                      >
+                        {profile.name}
+                      </Link>
+                    </TableCell>
+                    <TableCell>{sourceLabel(profile.source)}</TableCell>
+                    <TableCell>
+                      <TimeCell iso={profile.validAtUtc} />
+                    </TableCell>
+                    <TableCell className={styles.numeric}>{fixed(profile.foEMHz, 2)}</TableCell>
+                    <TableCell className={styles.numeric}>{fixed(profile.foF2MHz, 2)}</TableCell>
+                    <TableCell className={styles.numeric}>{fixed(profile.hmF2Km, 0)}</TableCell>
+                    <TableCell className={styles.numeric}>
+                      {fixed(profile.verticalTecu, 1)}
+                    </TableCell>
+                    <TableCell>
+                      {profile.published ? (
+                        <Badge appearance="tint" color="brand">
+                          Published
+                        </Badge>
+                      ) : (
+                        <Badge appearance="outline" color="subtle">
+                          Private
+                        </Badge>
+                      )}
+                    </TableCell>
+                    <TableCell>
+                      <Body1>
+                        {own ? 'You' : (profile.ownerName ?? `User ${profile.ownerId}`)}
+                      </Body1>
+                    </TableCell>
+                    <TableCell>
+                      <ProfileRowActions
+                        profile={profile}
+                        canPublish={canPublish && (own || isAdmin)}
+                        canDelete={own || isAdmin}
+                        busy={busyId === profile.id}
+                        onPublish={(value) => publish.mutate({ id: profile.id, published: value })}
+                        onDelete={() => remove.mutate(profile.id)}
+                      />
+                    </TableCell>
+                  </TableRow>
+                );
+              })}
+            </TableBody>
+          </Table>
+        </div>
+        <div className={styles.footer}>
+          <div className={styles.pager}>
+            <Button size="small" disabled={page === 0} onClick={() => setPage((p) => p - 1)}>
+              Previous page
+            </Button>
+            <Caption1 aria-live="polite">
+              {first}–{last} of {total}
+            </Caption1>
+            <Button size="small" disabled={last >= total} onClick={() => setPage((p) => p + 1)}>
+              Next page
+            </Button>
+          </div>
+          <div className={styles.pager}>
+            <Caption1 className={table.muted}>
+              {picked.length === 0
+                ? 'Tick 2–4 profiles to compare them.'
+                : `${picked.length} picked for comparison`}
+            </Caption1>
+            <Button
+              as="a"
+              appearance="primary"
+              size="small"
+              disabled={picked.length < 2}
+              href={paths.profileCompare.getHref(picked)}
+              onClick={(event) => {
+                event.preventDefault();
+                if (picked.length >= 2) navigate(paths.profileCompare.getHref(picked));
+              }}
+            >
+              Compare picked
+            </Button>
+          </div>
+        </div>
+      </>
+    );
+  };
 
   return (
     <>
       {filters}
-      <div className={styles.wrapper}>
-        <Table className={styles.table} aria-label="Profile library">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell className={styles.pickColumn} aria-label="Pick to compare" />
-              <TableHeaderCell>Name</TableHeaderCell>
-              <TableHeaderCell className={styles.sourceColumn}>Source</TableHeaderCell>
-              <TableHeaderCell className={styles.timeColumn}>Valid at</TableHeaderCell>
-              <TableHeaderCell className={styles.numberColumn}>foE (MHz)</TableHeaderCell>
-              <TableHeaderCell className={styles.numberColumn}>foF2 (MHz)</TableHeaderCell>
-              <TableHeaderCell className={styles.numberColumn}>hmF2 (km)</TableHeaderCell>
-              <TableHeaderCell className={styles.numberColumn}>TEC (TECU)</TableHeaderCell>
-              <TableHeaderCell className={styles.publishedColumn}>Published</TableHeaderCell>
-              <TableHeaderCell className={styles.ownerColumn}>Owner</TableHeaderCell>
-              <TableHeaderCell className={styles.actionsColumn}>Actions</TableHeaderCell>
-            </TableRow>
-          </TableHeader>
-          <TableBody>
-            {items.map((profile: ProfileRow) => {
-              const own = profile.ownerId === currentUserId;
-              return (
-                <TableRow key={profile.id}>
-                  <TableCell>
-                    <Checkbox
-                      aria-label={`Pick ${profile.name} for comparison`}
-                      checked={picked.includes(profile.id)}
-                      onChange={(_, data) => togglePick(profile.id, data.checked === true)}
-                    />
-                  </TableCell>
-                  <TableCell>
-                    <Link
-                      as="a"
-                      href={paths.profileDetail.getHref(profile.id)}
-                      onClick={(e) => {
-                        e.preventDefault();
-                        navigate(paths.profileDetail.getHref(profile.id));
-                      }}
-                    >
-                      {profile.name}
-                    </Link>
-                  </TableCell>
-                  <TableCell>{sourceLabel(profile.source)}</TableCell>
-                  <TableCell>
-                    <TimeCell iso={profile.validAtUtc} />
-                  </TableCell>
-                  <TableCell className={styles.numeric}>{fixed(profile.foEMHz, 2)}</TableCell>
-                  <TableCell className={styles.numeric}>{fixed(profile.foF2MHz, 2)}</TableCell>
-                  <TableCell className={styles.numeric}>{fixed(profile.hmF2Km, 0)}</TableCell>
-                  <TableCell className={styles.numeric}>{fixed(profile.verticalTecu, 1)}</TableCell>
-                  <TableCell>
-                    {profile.published ? (
-                      <Badge appearance="tint" color="brand">
-                        Published
-                      </Badge>
-                    ) : (
-                      <Badge appearance="outline" color="subtle">
-                        Private
-                      </Badge>
-                    )}
-                  </TableCell>
-                  <TableCell>
-                    <Body1>{own ? 'You' : (profile.ownerName ?? `User ${profile.ownerId}`)}</Body1>
-                  </TableCell>
-                  <TableCell>
-                    <ProfileRowActions
-                      profile={profile}
-                      canPublish={canPublish && (own || isAdmin)}
-                      canDelete={own || isAdmin}
-                      busy={busyId === profile.id}
-                      onPublish={(value) => publish.mutate({ id: profile.id, published: value })}
-                      onDelete={() => remove.mutate(profile.id)}
-                    />
-                  </TableCell>
-                </TableRow>
-              );
-            })}
-          </TableBody>
-        </Table>
-      </div>
-      <div className={styles.footer}>
-        <div className={styles.pager}>
-          <Button size="small" disabled={page === 0} onClick={() => setPage((p) => p - 1)}>
-            Previous page
-          </Button>
-          <Caption1 aria-live="polite">
-            {first}–{last} of {total}
-          </Caption1>
-          <Button size="small" disabled={last >= total} onClick={() => setPage((p) => p + 1)}>
-            Next page
-          </Button>
-        </div>
-        <div className={styles.pager}>
-          <Caption1 className={styles.muted}>
-            {picked.length === 0
-              ? 'Tick 2–4 profiles to compare them.'
-              : `${picked.length} picked for comparison`}
-          </Caption1>
-          <Button
-            as="a"
-            appearance="primary"
-            size="small"
-            disabled={picked.length < 2}
-            href={paths.profileCompare.getHref(picked)}
-            onClick={(event) => {
-              event.preventDefault();
-              if (picked.length >= 2) navigate(paths.profileCompare.getHref(picked));
-            }}
-          >
-            Compare picked
-          </Button>
-        </div>
-      </div>
+      <QueryStateBoundary
+        query={profiles}
+        loadingLabel="Loading profiles…"
+        errorTitle="Could not load profiles"
+        padSpinner
+        empty={
+          <EmptyState icon={<DataArea24Regular />} title="No profiles match">
+            {source || mine || published !== 'any'
+              ? 'Change the filters to see more of the library.'
+              : canWrite
+                ? 'Build one from layer parameters, upload samples, or invert a sounding trace.'
+                : 'Published profiles will be listed here.'}
+          </EmptyState>
+        }
+        isEmpty={(data) => data.items.length === 0}
+      >
+        {list}
+      </QueryStateBoundary>
     </>
   );
 }

@@ -6,18 +6,13 @@ import {
   TableHeaderCell,
   TableRow,
   makeStyles,
-  tokens,
+  mergeClasses,
 } from '@fluentui/react-components';
+import { useTableStyles } from '@/components/data-table/table-styles';
 import type { UploadRowError } from '../api/types';
 
 const useStyles = makeStyles({
-  wrap: {
-    maxHeight: '320px',
-    overflow: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
+  wrap: { maxHeight: '320px', overflowY: 'auto' },
   narrow: { width: '80px' },
   column: { width: '200px' },
 });
@@ -25,8 +20,9 @@ const useStyles = makeStyles({
 /** Every row the server refused, with the line of the file and the reason. */
 export function UploadRowErrors({ rows }: { rows: UploadRowError[] }) {
   const styles = useStyles();
+  const table = useTableStyles();
   return (
-    <div className={styles.wrap}>
+    <div className={mergeClasses(table.wrapper, styles.wrap)}>
       <Table aria-label="Rows the server refused" size="small">
         <TableHeader>
           <TableRow>

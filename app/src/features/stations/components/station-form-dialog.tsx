@@ -1,30 +1,13 @@
-import {
-  Button,
-  Checkbox,
-  Dialog,
-  DialogActions,
-  DialogBody,
-  DialogContent,
-  DialogSurface,
-  DialogTitle,
-  Field,
-  Input,
-  MessageBar,
-  MessageBarBody,
-  Spinner,
-  Textarea,
-  makeStyles,
-  tokens,
-} from '@fluentui/react-components';
-import { useState, type FormEvent } from 'react';
+import { Checkbox, Field, Input, Textarea, makeStyles, tokens } from '@fluentui/react-components';
+import { useState } from 'react';
+import { FormDialog } from '@/components/form-dialog';
+import { useFormErrors, type FieldErrors } from '@/hooks/use-form-errors';
 import { useNotify } from '@/hooks/use-notify';
-import { isApiError } from '@/lib/api-client';
 import type { Station, StationInput } from '@/types/links';
 import { useCreateStation } from '../api/create-station';
 import { useUpdateStation } from '../api/update-station';
 
 const useStyles = makeStyles({
-  form: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
   row: {
     display: 'grid',
     gridTemplateColumns: 'repeat(auto-fit, minmax(140px, 1fr))',
@@ -42,7 +25,6 @@ interface Values {
   shared: boolean;
 }
 type FieldName = Exclude<keyof Values, 'shared'> | 'shared';
-type FieldErrors = Partial<Record<FieldName, string>>;
 
 const FIELD_NAMES: FieldName[] = [
   'name',
@@ -90,8 +72,8 @@ function initialValues(station?: Station, draft?: StationDraft): Values {
 
 const parseNumber = (value: string) => (value.trim() === '' ? Number.NaN : Number(value.trim()));
 
-function validate(values: Values): { errors: FieldErrors; input?: StationInput } {
-  const errors: FieldErrors = {};
+function validate(values: Values): { errors: FieldErrors<FieldName>; input?: StationInput } {
+  const errors: FieldErrors<FieldName> = {};
   const latDeg = parseNumber(values.latDeg);
   const lonDeg = parseNumber(values.lonDeg);
   const elevationM = values.elevationM.trim() === '' ? undefined : Number(values.elevationM);
@@ -138,7 +120,6 @@ function StationForm({ open, onOpenChange, station, draft, onSaved }: StationFor
   const styles = useStyles();
   const notify = useNotify();
   const [values, setValues] = useState<Values>(() => initialValues(station, draft));
-  const [errors, setErrors] = useState<FieldErrors>({});
   const done = (saved: Station) => {
     notify('success', station ? 'Station updated' : 'Station added', saved.name);
     onSaved?.(saved);
@@ -147,21 +128,17 @@ function StationForm({ open, onOpenChange, station, draft, onSaved }: StationFor
   const create = useCreateStation({ onSuccess: done });
   const update = useUpdateStation({ onSuccess: done });
   const mutation = station ? update : create;
-
-  const serverError = mutation.error;
-  const serverFields = isApiError(serverError) ? serverError.fields : undefined;
-  const namesAField = Object.keys(serverFields ?? {}).some((name) =>
-    FIELD_NAMES.includes(name as FieldName),
+  const { setErrors, clearError, formError, fieldProps } = useFormErrors(
+    FIELD_NAMES,
+    mutation.error,
   );
-  const formError = serverError && !namesAField ? serverError.message : undefined;
 
   const set = <K extends keyof Values>(name: K, value: Values[K]) => {
     setValues((previous) => ({ ...previous, [name]: value }));
-    setErrors((previous) => ({ ...previous, [name]: undefined }));
+    clearError(name);
   };
 
-  const onSubmit = (event: FormEvent<HTMLFormElement>) => {
-    event.preventDefault();
+  const onSubmit = () => {
     const { errors: found, input } = validate(values);
     setErrors(found);
     if (!input) return;
@@ -169,104 +146,70 @@ function StationForm({ open, onOpenChange, station, draft, onSaved }: StationFor
     else create.mutate(input);
   };
 
-  const message = (name: FieldName) => errors[name] ?? serverFields?.[name];
-  const fieldProps = (name: FieldName) => ({
-    validationMessage: message(name),
-    validationState: message(name) ? ('error' as const) : ('none' as const),
-  });
-
   return (
-    <Dialog open={open} onOpenChange={(_, data) => onOpenChange(data.open)}>
-      <DialogSurface aria-describedby={undefined}>
-        <form onSubmit={onSubmit} noValidate>
-          <DialogBody>
-            <DialogTitle>{station ? `Edit ${station.name}` : 'Add a station'}</DialogTitle>
-            <DialogContent className={styles.form}>
-              {formError && (
-                <MessageBar intent="error" role="alert">
-                  <MessageBarBody>{formError}</MessageBarBody>
-                </MessageBar>
-              )}
-              <div className={styles.row}>
-                <Field label="Station name" required {...fieldProps('name')}>
-                  <Input
-                    autoComplete="off"
-                    value={values.name}
-                    onChange={(_, data) => set('name', data.value)}
-                  />
-                </Field>
-                <Field label="Call sign" {...fieldProps('callSign')}>
-                  <Input
-                    autoComplete="off"
-                    value={values.callSign}
-                    onChange={(_, data) => set('callSign', data.value)}
-                  />
-                </Field>
-              </div>
-              <div className={styles.row}>
-                <Field
-                  label="Latitude (°)"
-                  hint="North positive"
-                  required
-                  {...fieldProps('latDeg')}
-                >
-                  <Input
-                    inputMode="decimal"
-                    value={values.latDeg}
-                    onChange={(_, data) => set('latDeg', data.value)}
-                  />
-                </Field>
-                <Field
-                  label="Longitude (°)"
-                  hint="East positive"
-                  required
-                  {...fieldProps('lonDeg')}
-                >
-                  <Input
-                    inputMode="decimal"
-                    value={values.lonDeg}
-                    onChange={(_, data) => set('lonDeg', data.value)}
-                  />
-                </Field>
-                <Field label="Elevation (m)" {...fieldProps('elevationM')}>
-                  <Input
-                    inputMode="decimal"
-                    value={values.elevationM}
-                    onChange={(_, data) => set('elevationM', data.value)}
-                  />
-                </Field>
-              </div>
-              <Field label="Notes" {...fieldProps('notes')}>
-                <Textarea
-                  value={values.notes}
-                  onChange={(_, data) => set('notes', data.value)}
-                  resize="vertical"
-                />
-              </Field>
-              <Field {...fieldProps('shared')}>
-                <Checkbox
-                  checked={values.shared}
-                  onChange={(_, data) => set('shared', data.checked === true)}
-                  label="Share this station with everyone on this Hopwise site"
-                />
-              </Field>
-            </DialogContent>
-            <DialogActions>
-              <Button appearance="secondary" onClick={() => onOpenChange(false)}>
-                Cancel
-              </Button>
-              <Button
-                type="submit"
-                appearance="primary"
-                disabled={mutation.isPending}
-                icon={mutation.isPending ? <Spinner size="tiny" aria-hidden /> : undefined}
-              >
-                {mutation.isPending ? 'Saving…' : station ? 'Save station' : 'Add station'}
-              </Button>
-            </DialogActions>
-          </DialogBody>
-        </form>
-      </DialogSurface>
-    </Dialog>
+    <FormDialog
+      open={open}
+      onOpenChange={onOpenChange}
+      title={station ? `Edit ${station.name}` : 'Add a station'}
+      onSubmit={onSubmit}
+      submitLabel={station ? 'Save station' : 'Add station'}
+      pendingLabel="Saving…"
+      pending={mutation.isPending}
+      error={formError}
+    >
+      <div className={styles.row}>
+        <Field label="Station name" required {...fieldProps('name')}>
+          <Input
+            autoComplete="off"
+            value={values.name}
+            onChange={(_, data) => set('name', data.value)}
+          />
+        </Field>
+        <Field label="Call sign" {...fieldProps('callSign')}>
+          <Input
+            autoComplete="off"
+            value={values.callSign}
+            onChange={(_, data) => set('callSign', data.value)}
+          />
+        </Field>
+      </div>
+      <div className={styles.row}>
+        <Field label="Latitude (°)" hint="North positive" required {...fieldProps('latDeg')}>
+          <Input
+            inputMode="decimal"
+            value={values.latDeg}
+            onChange={(_, data) => set('latDeg', data.value)}
+          />
+        </Field>
+        <Field label="Longitude (°)" hint="East positive" required {...fieldProps('lonDeg')}>
+          <Input
+            inputMode="decimal"
+            value={values.lonDeg}
+            onChange={(_, data) => set('lonDeg', data.value)}
+          />
+        </Field>
+        <Field label="Elevation (m)" {...fieldProps('elevationM')}>
+          <Input
+            inputMode="decimal"
+            value={values.elevationM}
+            onChange={(_, data) => set('elevationM', data.value)}
+          />
+        </Field>
+      </div>
+      <Field label="Notes" {...fieldProps('notes')}>
+        <Textarea
+          value={values.notes}
+          onChange={(_, data) => set('notes', data.value)}
+          resize="vertical"
+        />
+      </Field>
+      <Field {...fieldProps('shared')}>
+        <Checkbox
+          checked={values.shared}
+          onChange={(_, data) => set('shared', data.checked === true)}
+          label="Share this station with everyone on this Hopwise site"
+        />
+      </Field>
+    </FormDialog>
   );
 }

@@ -8,16 +8,11 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
+import { useTableStyles } from '@/components/data-table/table-styles';
 import { EmptyState } from '@/components/empty-state';
 import type { ObliqueModeResult } from '@/types/links';
 
 const useStyles = makeStyles({
-  wrapper: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   table: { minWidth: '980px' },
   number: { textAlign: 'right', fontVariantNumeric: 'tabular-nums' },
   label: { fontWeight: tokens.fontWeightSemibold },
@@ -54,6 +49,7 @@ export function ModeTable({
   frequencyMHz: number;
 }) {
   const styles = useStyles();
+  const table = useTableStyles();
   if (modes.length === 0) {
     return (
       <EmptyState title={`No sky-wave mode at ${frequencyMHz} MHz`}>
@@ -64,7 +60,7 @@ export function ModeTable({
   }
   const rows = [...modes].sort((a, b) => a.groupDelayMs - b.groupDelayMs);
   return (
-    <div className={styles.wrapper}>
+    <div className={table.wrapper}>
       <Table className={styles.table} aria-label={`Modes at ${frequencyMHz} MHz`} size="small">
         <TableHeader>
           <TableRow>

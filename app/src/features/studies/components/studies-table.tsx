@@ -3,10 +3,6 @@ import {
   Button,
   Caption1,
   Field,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
   Select,
   Spinner,
   Table,
@@ -16,12 +12,15 @@ import {
   TableHeaderCell,
   TableRow,
   makeStyles,
-  tokens,
 } from '@fluentui/react-components';
 import { ArrowDownload16Regular } from '@fluentui/react-icons';
+import type { ListResponse } from '@hopwise/common';
 import { useState } from 'react';
-import { ConfirmDialog } from '@/components/confirm-dialog';
+import { DeleteConfirmDialog } from '@/components/confirm-dialog';
+import { useTableStyles } from '@/components/data-table/table-styles';
+import { TimeCell } from '@/components/data-table/time-cell';
 import { EmptyState } from '@/components/empty-state';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { useNotify } from '@/hooks/use-notify';
 import type { HfLink, Study } from '@/types/links';
 import { formatUtcAndLocal } from '@/utils/format-time';
@@ -31,21 +30,7 @@ import { exportStudyCsv } from '../api/export-study-csv';
 import { useStudies } from '../api/get-studies';
 
 const useStyles = makeStyles({
-  toolbar: {
-    display: 'flex',
-    gap: tokens.spacingHorizontalM,
-    marginBottom: tokens.spacingVerticalM,
-  },
-  wrapper: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   table: { minWidth: '820px' },
-  stack: { display: 'flex', flexDirection: 'column' },
-  muted: { color: tokens.colorNeutralForeground3 },
-  actions: { display: 'flex', flexWrap: 'nowrap', gap: tokens.spacingHorizontalS },
 });
 
 const describeFrequencies = (list: number[]) =>
@@ -64,6 +49,7 @@ interface StudiesTableProps {
 /** Saved studies, newest first by study time, with open, CSV export and delete. */
 export function StudiesTable({ links, initialLinkId, onOpen, onDeleted }: StudiesTableProps) {
   const styles = useStyles();
+  const table = useTableStyles();
   const notify = useNotify();
   const [linkId, setLinkId] = useState<number | undefined>(initialLinkId);
   const [order, setOrder] = useState<'asc' | 'desc'>('desc');
@@ -90,100 +76,74 @@ export function StudiesTable({ links, initialLinkId, onOpen, onDeleted }: Studie
     }
   };
 
-  let body;
-  if (studies.isPending) body = <Spinner label="Loading studies…" />;
-  else if (studies.isError) {
-    body = (
-      <MessageBar intent="error" layout="multiline" role="alert">
-        <MessageBarBody>
-          <MessageBarTitle>Could not load studies</MessageBarTitle>
-          {studies.error.message}
-        </MessageBarBody>
-        <MessageBarActions>
-          <Button onClick={() => void studies.refetch()}>Try again</Button>
-        </MessageBarActions>
-      </MessageBar>
-    );
-  } else if (studies.data.items.length === 0) {
-    body = (
-      <EmptyState title="No saved studies">
-        Run a study with “Run and save” and it will be listed here.
-      </EmptyState>
-    );
-  } else {
-    body = (
-      <div className={styles.wrapper}>
-        <Table className={styles.table} aria-label="Saved studies" sortable size="small">
-          <TableHeader>
-            <TableRow>
-              <TableHeaderCell
-                sortDirection={order === 'asc' ? 'ascending' : 'descending'}
-                onClick={() => setOrder((o) => (o === 'asc' ? 'desc' : 'asc'))}
-              >
-                Study time
-              </TableHeaderCell>
-              <TableHeaderCell>Link</TableHeaderCell>
-              <TableHeaderCell>Frequencies</TableHeaderCell>
-              <TableHeaderCell>MUF (1 hop)</TableHeaderCell>
-              <TableHeaderCell>Actions</TableHeaderCell>
-            </TableRow>
-          </TableHeader>
-          <TableBody>
-            {studies.data.items.map((study) => {
-              const when = formatUtcAndLocal(study.atUtc);
-              const muf = study.result?.perFrequency?.[0]?.mufMHz?.['1'];
-              return (
-                <TableRow key={study.id}>
-                  <TableCell>
-                    <div className={styles.stack}>
-                      <Body1>{when.utc}</Body1>
-                      <Caption1 className={styles.muted}>{when.localShort} local</Caption1>
-                    </div>
-                  </TableCell>
-                  <TableCell>
-                    <div className={styles.stack}>
-                      <Body1>{linkName(study.linkId)}</Body1>
-                      {study.name && <Caption1 className={styles.muted}>{study.name}</Caption1>}
-                    </div>
-                  </TableCell>
-                  <TableCell>{describeFrequencies(study.frequenciesMHz)}</TableCell>
-                  <TableCell>{formatMHz(muf)}</TableCell>
-                  <TableCell>
-                    <div className={styles.actions}>
-                      <Button size="small" onClick={() => onOpen(study)}>
-                        Open
-                      </Button>
-                      <Button
-                        size="small"
-                        icon={
-                          exportingId === study.id ? (
-                            <Spinner size="extra-tiny" aria-hidden />
-                          ) : (
-                            <ArrowDownload16Regular />
-                          )
-                        }
-                        disabled={exportingId === study.id}
-                        onClick={() => void onExport(study)}
-                      >
-                        Export CSV
-                      </Button>
-                      <Button size="small" onClick={() => setDeleting(study)}>
-                        Delete
-                      </Button>
-                    </div>
-                  </TableCell>
-                </TableRow>
-              );
-            })}
-          </TableBody>
-        </Table>
-      </div>
-    );
-  }
+  const list = ({ items }: ListResponse<Study>) => (
+    <div className={table.wrapper}>
+      <Table className={styles.table} aria-label="Saved studies" sortable size="small">
+        <TableHeader>
+          <TableRow>
+            <TableHeaderCell
+              sortDirection={order === 'asc' ? 'ascending' : 'descending'}
+              onClick={() => setOrder((o) => (o === 'asc' ? 'desc' : 'asc'))}
+            >
+              Study time
+            </TableHeaderCell>
+            <TableHeaderCell>Link</TableHeaderCell>
+            <TableHeaderCell>Frequencies</TableHeaderCell>
+            <TableHeaderCell>MUF (1 hop)</TableHeaderCell>
+            <TableHeaderCell>Actions</TableHeaderCell>
+          </TableRow>
+        </TableHeader>
+        <TableBody>
+          {items.map((study) => {
+            const muf = study.result?.perFrequency?.[0]?.mufMHz?.['1'];
+            return (
+              <TableRow key={study.id}>
+                <TableCell>
+                  <TimeCell iso={study.atUtc} />
+                </TableCell>
+                <TableCell>
+                  <div className={table.stack}>
+                    <Body1>{linkName(study.linkId)}</Body1>
+                    {study.name && <Caption1 className={table.muted}>{study.name}</Caption1>}
+                  </div>
+                </TableCell>
+                <TableCell>{describeFrequencies(study.frequenciesMHz)}</TableCell>
+                <TableCell>{formatMHz(muf)}</TableCell>
+                <TableCell>
+                  <div className={table.actions}>
+                    <Button size="small" onClick={() => onOpen(study)}>
+                      Open
+                    </Button>
+                    <Button
+                      size="small"
+                      icon={
+                        exportingId === study.id ? (
+                          <Spinner size="extra-tiny" aria-hidden />
+                        ) : (
+                          <ArrowDownload16Regular />
+                        )
+                      }
+                      disabled={exportingId === study.id}
+                      onClick={() => void onExport(study)}
+                    >
+                      Export CSV
+                    </Button>
+                    <Button size="small" onClick={() => setDeleting(study)}>
+                      Delete
+                    </Button>
+                  </div>
+                </TableCell>
+              </TableRow>
+            );
+          })}
+        </TableBody>
+      </Table>
+    </div>
+  );
 
   return (
     <>
-      <div className={styles.toolbar}>
+      <div className={table.toolbar}>
         <Field label="Link">
           <Select
             value={linkId === undefined ? '' : String(linkId)}
@@ -198,22 +158,29 @@ export function StudiesTable({ links, initialLinkId, onOpen, onDeleted }: Studie
           </Select>
         </Field>
       </div>
-      {body}
-      <ConfirmDialog
-        open={deleting !== undefined}
+      <QueryStateBoundary
+        query={studies}
+        loadingLabel="Loading studies…"
+        errorTitle="Could not load studies"
+        empty={
+          <EmptyState title="No saved studies">
+            Run a study with “Run and save” and it will be listed here.
+          </EmptyState>
+        }
+        isEmpty={(data) => data.items.length === 0}
+      >
+        {list}
+      </QueryStateBoundary>
+      <DeleteConfirmDialog
+        item={deleting}
+        mutation={remove}
         title="Delete this study?"
         confirmLabel="Delete study"
-        busy={remove.isPending}
-        error={remove.error?.message}
-        onConfirm={() => deleting && remove.mutate(deleting.id)}
-        onCancel={() => {
-          setDeleting(undefined);
-          remove.reset();
-        }}
+        onClose={() => setDeleting(undefined)}
       >
         The saved results of {deleting ? linkName(deleting.linkId) : 'this link'} at{' '}
         {deleting ? formatUtcAndLocal(deleting.atUtc).utc : ''} will be removed.
-      </ConfirmDialog>
+      </DeleteConfirmDialog>
     </>
   );
 }

@@ -3,12 +3,7 @@ import {
   Body1,
   Button,
   Caption1,
-  MessageBar,
-  MessageBarActions,
-  MessageBarBody,
-  MessageBarTitle,
   Select,
-  Spinner,
   Table,
   TableBody,
   TableCell,
@@ -17,33 +12,24 @@ import {
   TableHeaderCell,
   TableRow,
   makeStyles,
-  tokens,
 } from '@fluentui/react-components';
-import { ROLES, isRole, type UserView } from '@hopwise/common';
+import { ROLES, isRole, type ListResponse, type UserView } from '@hopwise/common';
+import { useTableStyles } from '@/components/data-table/table-styles';
+import { TimeCell } from '@/components/data-table/time-cell';
 import { EmptyState } from '@/components/empty-state';
+import { QueryStateBoundary } from '@/components/query-state-boundary';
 import { useNotify } from '@/hooks/use-notify';
-import { formatUtcAndLocal } from '@/utils/format-time';
 import { roleLabel } from '@/utils/role-labels';
 import { useUsers } from '../api/get-users';
 import { useUpdateUser, type UpdateUserInput } from '../api/update-user';
 
 const useStyles = makeStyles({
-  wrapper: {
-    overflowX: 'auto',
-    backgroundColor: tokens.colorNeutralBackground1,
-    borderRadius: tokens.borderRadiusLarge,
-    boxShadow: tokens.shadow4,
-  },
   table: { minWidth: '820px' },
   roleColumn: { width: '190px' },
   statusColumn: { width: '110px' },
   createdColumn: { width: '230px' },
   accessColumn: { width: '110px' },
-  muted: { color: tokens.colorNeutralForeground3 },
-  stack: { display: 'flex', flexDirection: 'column' },
   select: { width: '170px' },
-  loading: { padding: tokens.spacingVerticalXXL },
-  total: { marginTop: tokens.spacingVerticalS, color: tokens.colorNeutralForeground3 },
 });
 
 function describeChange(input: UpdateUserInput, email: string): string {
@@ -53,6 +39,7 @@ function describeChange(input: UpdateUserInput, email: string): string {
 
 export function UsersTable({ currentUserId }: { currentUserId: number }) {
   const styles = useStyles();
+  const table = useTableStyles();
   const notify = useNotify();
   const users = useUsers();
 
@@ -72,34 +59,11 @@ export function UsersTable({ currentUserId }: { currentUserId: number }) {
       notify('error', `Could not update ${emailOf(input.id)}`, error.message),
   });
 
-  if (users.isPending) {
-    return <Spinner className={styles.loading} label="Loading users…" />;
-  }
-
-  if (users.isError) {
-    return (
-      <MessageBar intent="error" layout="multiline" role="alert">
-        <MessageBarBody>
-          <MessageBarTitle>Could not load users</MessageBarTitle>
-          {users.error.message}
-        </MessageBarBody>
-        <MessageBarActions>
-          <Button onClick={() => void users.refetch()}>Try again</Button>
-        </MessageBarActions>
-      </MessageBar>
-    );
-  }
-
-  const { items, total } = users.data;
-  if (items.length === 0) {
-    return <EmptyState title="No users yet">Add the first account with “Add user”.</EmptyState>;
-  }
-
   const busyId = update.isPending ? update.variables?.id : undefined;
 
-  return (
+  const list = ({ items, total }: ListResponse<UserView>) => (
     <>
-      <div className={styles.wrapper}>
+      <div className={table.wrapper}>
         <Table className={styles.table} aria-label="Users">
           <TableHeader>
             <TableRow>
@@ -112,14 +76,13 @@ export function UsersTable({ currentUserId }: { currentUserId: number }) {
           </TableHeader>
           <TableBody>
             {items.map((user: UserView) => {
-              const created = formatUtcAndLocal(user.createdAt);
               const isSelf = user.id === currentUserId;
               const busy = busyId === user.id;
               return (
                 <TableRow key={user.id}>
                   <TableCell>
                     <TableCellLayout
-                      description={<Caption1 className={styles.muted}>{user.email}</Caption1>}
+                      description={<Caption1 className={table.muted}>{user.email}</Caption1>}
                     >
                       <Body1>
                         {user.displayName}
@@ -158,10 +121,7 @@ export function UsersTable({ currentUserId }: { currentUserId: number }) {
                     )}
                   </TableCell>
                   <TableCell>
-                    <div className={styles.stack}>
-                      <Body1>{created.utc}</Body1>
-                      <Caption1 className={styles.muted}>{created.localShort} local</Caption1>
-                    </div>
+                    <TimeCell iso={user.createdAt} />
                   </TableCell>
                   <TableCell>
                     <Button
@@ -181,11 +141,24 @@ export function UsersTable({ currentUserId }: { currentUserId: number }) {
           </TableBody>
         </Table>
       </div>
-      <Caption1 as="p" className={styles.total}>
+      <Caption1 as="p" className={table.total}>
         {total === items.length
           ? `${total} ${total === 1 ? 'user' : 'users'}`
           : `Showing ${items.length} of ${total} users`}
       </Caption1>
     </>
+  );
+
+  return (
+    <QueryStateBoundary
+      query={users}
+      loadingLabel="Loading users…"
+      errorTitle="Could not load users"
+      padSpinner
+      empty={<EmptyState title="No users yet">Add the first account with “Add user”.</EmptyState>}
+      isEmpty={(data) => data.items.length === 0}
+    >
+      {list}
+    </QueryStateBoundary>
   );
 }
