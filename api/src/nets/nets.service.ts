@@ -255,8 +255,8 @@ export class NetsService {
     };
   }
 
-  /** The draft of a day: plan per path, combined, overrides merged. */
-  private draft(
+  /** The draft of a day: plan per path (in the worker pool, in parallel), combined, overrides merged. */
+  private async draft(
     net: NetWithMembers,
     user: UserView,
     dateUtc: string,
@@ -283,17 +283,19 @@ export class NetsService {
         distanceKm: geometry.distanceKm,
       };
     });
-    const plans = paths.map((p) =>
-      this.plans.planForLink(
-        {
-          from: p.from,
-          to: p.to,
-          dateUtc,
-          channelsKHz: net.channelsKHz,
-          profileSource,
-          slotMinutes,
-        },
-        user,
+    const plans = await Promise.all(
+      paths.map((p) =>
+        this.plans.planForLink(
+          {
+            from: p.from,
+            to: p.to,
+            dateUtc,
+            channelsKHz: net.channelsKHz,
+            profileSource,
+            slotMinutes,
+          },
+          user,
+        ),
       ),
     );
     const dayStart = `${dateUtc}T00:00:00.000Z`;
@@ -307,7 +309,7 @@ export class NetsService {
     return { slots: combinePlans(plans, overrides), paths };
   }
 
-  schedule(user: UserView, id: number, q: ScheduleQuery): NetScheduleView {
+  async schedule(user: UserView, id: number, q: ScheduleQuery): Promise<NetScheduleView> {
     const net = this.visible(user, id);
     const dateUtc = q.dateUtc ?? todayUtc();
     checkDate(dateUtc);
@@ -315,7 +317,9 @@ export class NetsService {
     const slotMinutes = q.slotMinutes ?? 60;
     const latest = this.repo.schedule(net.id);
     const manage = this.canManage(net, user);
-    const draft = manage ? this.draft(net, user, dateUtc, profileSource, slotMinutes) : undefined;
+    const draft = manage
+      ? await this.draft(net, user, dateUtc, profileSource, slotMinutes)
+      : undefined;
     return {
       netId: net.id,
       dateUtc,
@@ -355,12 +359,12 @@ export class NetsService {
     return { overrides: slots };
   }
 
-  publish(user: UserView, id: number, dto: PublishDto): ScheduleVersionView {
+  async publish(user: UserView, id: number, dto: PublishDto): Promise<ScheduleVersionView> {
     const net = this.managed(user, id);
     checkDate(dto.dateUtc);
     const profileSource = parseSource(dto.profileSource);
     const slotMinutes = dto.slotMinutes ?? 60;
-    const { slots } = this.draft(net, user, dto.dateUtc, profileSource, slotMinutes);
+    const { slots } = await this.draft(net, user, dto.dateUtc, profileSource, slotMinutes);
     const row = this.repo.publish(
       {
         netId: net.id,

@@ -1,7 +1,5 @@
 import {
   computeErrorStatus,
-  computePlan,
-  diurnalModel,
   parsePlanRequest,
   pathGeometry,
   type GeoPoint,
@@ -33,8 +31,7 @@ export interface PlanForLinkInput {
  * nearest the control point, or a stored profile the user may see.
  * The route's plan runs in the compute worker pool (ComputeService: time limit, result cache), as
  * a 24-slot plan takes ~0.1–0.4 s (scripts/bench.mjs `plan`); the request is parsed and the link
- * and profile source are resolved here first; the watch uses planForLinkInPool. planForLink, for
- * the nets' schedule, still computes in the calling thread.
+ * and profile source are resolved here first. Nets' schedules and the watch plan the same way.
  */
 @Injectable()
 export class PlanService {
@@ -66,18 +63,24 @@ export class PlanService {
       from = { latDeg: a.latDeg, lonDeg: a.lonDeg };
       to = { latDeg: b.latDeg, lonDeg: b.lonDeg };
     }
-    const ends = { from: from as GeoPoint, to: to as GeoPoint };
-    return this.compute.plan({
-      ...ends,
-      dateUtc: req.dateUtc,
-      channelsKHz: req.channelsKHz,
-      slotMinutes: req.slotMinutes,
-      profile: this.profileSourceFor(req.profileSource, ends.from, ends.to, user),
-    });
+    return this.planForLink(
+      {
+        from: from as GeoPoint,
+        to: to as GeoPoint,
+        dateUtc: req.dateUtc,
+        channelsKHz: req.channelsKHz,
+        profileSource: req.profileSource,
+        slotMinutes: req.slotMinutes,
+      },
+      user,
+    );
   }
 
-  /** planForLink in the worker pool (time limit, cache): for background callers like the watch. */
-  planForLinkInPool(input: PlanForLinkInput, user?: UserView): Promise<PlanResponse> {
+  /**
+   * The plan for a path, in the worker pool (also used by nets and the watch). `user` decides
+   * which stored profiles may be used; without one (the system) any live profile may.
+   */
+  planForLink(input: PlanForLinkInput, user?: UserView): Promise<PlanResponse> {
     return this.compute.plan({
       from: input.from,
       to: input.to,
@@ -86,28 +89,6 @@ export class PlanService {
       slotMinutes: input.slotMinutes ?? 60,
       profile: this.profileSourceFor(input.profileSource, input.from, input.to, user),
     });
-  }
-
-  /**
-   * The plan for a path (also used by nets and the watch). `user` decides which stored profiles
-   * may be used; without one (the system) any live profile may.
-   */
-  planForLink(input: PlanForLinkInput, user?: UserView): PlanResponse {
-    const profile = this.profileSourceFor(input.profileSource, input.from, input.to, user);
-    const profileAt =
-      profile === 'model'
-        ? (at: Date, point: GeoPoint) => diurnalModel(point, at).profile
-        : () => profile;
-    return this.guard(() =>
-      computePlan({
-        from: input.from,
-        to: input.to,
-        dateUtc: input.dateUtc,
-        channelsKHz: input.channelsKHz,
-        slotMinutes: input.slotMinutes ?? 60,
-        profileAt,
-      }),
-    );
   }
 
   /** `'model'` (the diurnal model per slot), or the feed's or a stored profile's data. */

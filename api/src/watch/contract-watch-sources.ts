@@ -43,7 +43,7 @@ export class ContractWatchSources extends WatchSources {
   }
 
   plan(request: WatchPlanRequest): Promise<PlanResponse> {
-    return this.planner.planForLinkInPool(request);
+    return this.planner.planForLink(request);
   }
 
   latestFeedProfile(point: GeoPoint) {
