@@ -7,7 +7,8 @@
 // Targets on a 2-core machine: compute/oblique ≥ 500 req/s with p99 ≤ 50 ms; lists ≥ 2000 req/s;
 // 0 errors; RSS flat over the soak. A benchmark, not a test: it reports, it does not assert.
 // `oblique same` repeats one body (answered from the compute cache after the first);
-// `oblique fresh` draws a new frequency and range per request (every one computed). The health
+// `oblique sweep` a new frequency on one of 8 paths (MUFs of a path reused by the worker);
+// `oblique fresh` draws a new frequency and range per request (everything computed). The health
 // route (no sign-in, no database) is the framework's ceiling on this machine, for scale.
 import autocannon from 'autocannon';
 import { spawn } from 'node:child_process';
@@ -117,12 +118,26 @@ try {
   ).status;
   if (obliqueStatus !== 200) console.warn(`warning: compute/oblique answered ${obliqueStatus}`);
 
+  // A fresh frequency on one of 8 paths: users sweeping the channels of a few links (the
+  // worker reuses each path's MUF search; the answer cache cannot help).
+  const sweepOblique = (req) => ({
+    ...req,
+    body: JSON.stringify({
+      profile,
+      frequencyMHz: Number((5 + 9 * Math.random()).toFixed(3)),
+      groundRangeKm: 800 + 200 * Math.floor(8 * Math.random()),
+    }),
+  });
+
   const scenarios = {
     'GET /api/health (no sign-in)': [{ method: 'GET', path: '/api/health' }],
     'GET /api/stations': [{ method: 'GET', path: '/api/stations', headers: auth }],
     'GET /api/profiles': [{ method: 'GET', path: '/api/profiles', headers: auth }],
     'POST /api/compute/oblique same': [
       { method: 'POST', path: '/api/compute/oblique', headers: auth, body: oblique },
+    ],
+    'POST /api/compute/oblique sweep': [
+      { method: 'POST', path: '/api/compute/oblique', headers: auth, setupRequest: sweepOblique },
     ],
     'POST /api/compute/oblique fresh': [
       { method: 'POST', path: '/api/compute/oblique', headers: auth, setupRequest: freshOblique },

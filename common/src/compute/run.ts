@@ -66,7 +66,32 @@ function resolveProfile(
       ),
     };
   }
-  return buildProfile(data, { earthRadiusKm });
+  return builtProfile(data, earthRadiusKm);
+}
+
+/** Built profiles kept per thread (a worker serves many requests on the same few profiles). */
+const BUILT_PROFILES_KEPT = 32;
+const builtProfiles = new Map<string, Profile>();
+
+/**
+ * buildProfile, memoised by the profile's data: a Profile is immutable, and the physics keeps its
+ * height grid and quadrature nodes on it (oblique.ts profileTable), so a sweep of frequencies or
+ * ranges on one profile builds them once instead of per request. Bounded LRU; errors are thrown,
+ * never kept.
+ */
+function builtProfile(data: ProfileData, earthRadiusKm: number | undefined): Profile {
+  const key = JSON.stringify([earthRadiusKm ?? null, data]);
+  let profile = builtProfiles.get(key);
+  if (profile) {
+    builtProfiles.delete(key); // re-insert: most recently used last
+  } else {
+    profile = buildProfile(data, { earthRadiusKm });
+    if (builtProfiles.size >= BUILT_PROFILES_KEPT) {
+      builtProfiles.delete(builtProfiles.keys().next().value as string);
+    }
+  }
+  builtProfiles.set(key, profile);
+  return profile;
 }
 
 export function isComputeRoute(route: unknown): route is ComputeRoute {

@@ -17,7 +17,7 @@ import {
 } from './constants.js';
 import { scanElevations } from './elevation-scan.js';
 import { InputError } from './errors.js';
-import { mufPerHops } from './muf.js';
+import { mufPerHopsCached } from './muf.js';
 import {
   hopIntegrals,
   prepareMedium,
@@ -217,7 +217,7 @@ export function computeOblique(profile: Profile, params: ObliqueParams): Oblique
   return params.mufs
     ? {
         modes: clean,
-        mufMHz: mufPerHops(profile, groundRangeKm, maxHops, minElevationDeg, earth),
+        mufMHz: mufPerHopsCached(profile, groundRangeKm, maxHops, minElevationDeg, earth),
         multipathSpreadMs,
       }
     : { modes: clean, multipathSpreadMs };

@@ -501,3 +501,34 @@ function refine(
   // Brent's answer lies within the tolerance of the transition, on either side: step below it.
   return Math.max(loMHz, root - toleranceMHz);
 }
+
+/** MUF sets kept per profile (each is a few numbers). */
+const MUFS_KEPT_PER_PROFILE = 64;
+const mufsByProfile = new WeakMap<Profile, Map<string, Record<string, number | null>>>();
+
+/**
+ * mufPerHops, remembered per profile: the MUFs depend on the profile and the path, not on the
+ * frequency, so a frequency sweep over one path (the usual study) searches them once. Keyed by
+ * the Profile object (compute/run.ts reuses built profiles); a copy is returned each time.
+ */
+export function mufPerHopsCached(
+  profile: Profile,
+  groundRangeKm: number,
+  maxHops: number,
+  minElevationDeg: number,
+  earth: EarthModel,
+): Record<string, number | null> {
+  let kept = mufsByProfile.get(profile);
+  if (!kept) {
+    kept = new Map();
+    mufsByProfile.set(profile, kept);
+  }
+  const key = `${groundRangeKm}|${maxHops}|${minElevationDeg}|${earth}`;
+  let mufs = kept.get(key);
+  if (!mufs) {
+    mufs = mufPerHops(profile, groundRangeKm, maxHops, minElevationDeg, earth);
+    if (kept.size >= MUFS_KEPT_PER_PROFILE) kept.delete(kept.keys().next().value as string);
+    kept.set(key, mufs);
+  }
+  return { ...mufs };
+}
