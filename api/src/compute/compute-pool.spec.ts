@@ -2,7 +2,7 @@ import { fileURLToPath } from 'node:url';
 import { computePlan, diurnalModel, runCompute } from '@hopwise/common';
 import { afterEach, describe, expect, it } from 'vitest';
 import { ComputePool, ComputePoolClosedError, ComputeTimeoutError } from './compute-pool.js';
-import { planTask, routeTask, type PlanTaskInput } from './compute-task.js';
+import { planTask, routeTask, type ComputeReply, type PlanTaskInput } from './compute-task.js';
 
 /** The real worker, except that `plasma` with `{ stall: true }` never returns. */
 const STALLING_WORKER = fileURLToPath(
@@ -64,11 +64,11 @@ describe('ComputePool', () => {
     expect(planBad).toMatchObject({ ok: false, status: 400, fields: { to: expect.any(String) } });
   });
 
-  it('reports the JSON length of the outcome when asked (the cache size measure)', async () => {
+  it('answers with the outcome as JSON text when asked (what the result cache keeps)', async () => {
     pool = new ComputePool({ size: 1, timeoutMs: 60_000 });
-    const { size, ...outcome } = await pool.run({ ...plasma(10), measure: true });
-    expect(size).toBe(JSON.stringify(outcome).length);
-    expect((await pool.run(plasma(10))).size).toBeUndefined();
+    const text = await pool.run({ ...plasma(10), serialize: true });
+    expect(typeof text).toBe('string');
+    expect(JSON.parse(text as string)).toEqual(await pool.run(plasma(10)));
   });
 
   it('stops a task over its time limit, replaces the worker and keeps serving', async () => {
@@ -87,13 +87,9 @@ describe('ComputePool', () => {
     pool = new ComputePool({ size: 2, timeoutMs: 60_000, filename: STALLING_WORKER });
     const stalled = pool.run(stall).catch((err: unknown) => err);
     const outcomes = await Promise.all([1, 2, 3, 4, 5].map((f) => pool!.run(plasma(f))));
-    expect(outcomes.map((o) => o.ok && (o.result as { propagates: boolean }).propagates)).toEqual([
-      false,
-      false,
-      false,
-      true,
-      true,
-    ]);
+    const propagates = (o: ComputeReply) =>
+      typeof o !== 'string' && o.ok && (o.result as { propagates: boolean }).propagates;
+    expect(outcomes.map(propagates)).toEqual([false, false, false, true, true]);
     expect(pool.pending).toBe(1);
     // The stalled task is still running; closing stops it.
     expect(await pool.close()).toBe(1);

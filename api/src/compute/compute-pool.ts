@@ -1,9 +1,9 @@
 import { setTimeout as sleep } from 'node:timers/promises';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
-import type { ComputeOutcome, ComputeTask } from './compute-task.js';
+import type { ComputeReply, ComputeTask } from './compute-task.js';
 
-export type { ComputeOutcome, ComputeTask } from './compute-task.js';
+export type { ComputeOutcome, ComputeReply, ComputeTask } from './compute-task.js';
 
 /**
  * The worker threads running the physics core (piscina), so a long or pathological computation
@@ -44,7 +44,7 @@ export interface ComputePoolOptions {
 }
 
 export class ComputePool {
-  private readonly piscina: Piscina<ComputeTask, ComputeOutcome>;
+  private readonly piscina: Piscina<ComputeTask, ComputeReply>;
   private readonly timeoutMs: number;
   private readonly running = new Set<Promise<unknown>>();
   private closing = false;
@@ -70,7 +70,7 @@ export class ComputePool {
    * Runs one task. Rejects with ComputeTimeoutError over the time limit, ComputePoolClosedError
    * once close() has begun, or the worker's own failure (it exited or could not start).
    */
-  run(task: ComputeTask, timeoutMs = this.timeoutMs): Promise<ComputeOutcome> {
+  run(task: ComputeTask, timeoutMs = this.timeoutMs): Promise<ComputeReply> {
     if (this.closing) return Promise.reject(new ComputePoolClosedError());
     const abort = new AbortController();
     const timer = setTimeout(() => abort.abort(new ComputeTimeoutError(timeoutMs)), timeoutMs);

@@ -29,11 +29,14 @@ export type ComputeTask = (
     }
   | { kind: 'plan'; /** stableJson of a PlanTaskInput */ json: string }
 ) & {
-  /** Ask the worker for the outcome's JSON length (the result cache's size measure). */
-  measure?: boolean;
+  /**
+   * Ask the worker for the outcome as JSON text (a ComputeReply string): what the result cache
+   * keeps, as compact on the heap as the text itself, and cheap to pass between threads.
+   */
+  serialize?: boolean;
 };
 
-export type ComputeOutcome = (
+export type ComputeOutcome =
   | { ok: true; result: unknown }
   | {
       ok: false;
@@ -44,11 +47,10 @@ export type ComputeOutcome = (
       convergence?: string;
       /** Set for unexpected errors: the stack, for the server log only. */
       internal?: string;
-    }
-) & {
-  /** JSON length of the outcome, when the task asked for it. */
-  size?: number;
-};
+    };
+
+/** What a worker answers: the outcome, or its JSON text when the task asked to `serialize`. */
+export type ComputeReply = ComputeOutcome | string;
 
 /**
  * JSON with every object's keys in sorted order, so equal values give equal text whatever the

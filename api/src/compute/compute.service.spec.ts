@@ -71,6 +71,17 @@ describe('ComputeService', () => {
     expect(dispatches()).toBe(2);
   });
 
+  it('gives every caller its own copy: changing one answer changes no other', async () => {
+    s = service();
+    const [a, b] = (await Promise.all([1, 2].map(() => s!.run('plasma', plasmaBody)))) as {
+      refractiveIndex: number;
+    }[];
+    a.refractiveIndex = -1;
+    expect(b.refractiveIndex).toBeGreaterThan(0);
+    const c = (await s.run('plasma', plasmaBody)) as { refractiveIndex: number };
+    expect(c.refractiveIndex).toBe(b.refractiveIndex);
+  });
+
   it('computes identical concurrent requests once', async () => {
     s = service();
     spyPool();

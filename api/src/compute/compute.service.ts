@@ -10,6 +10,7 @@ import {
   planTask,
   routeTask,
   type ComputeOutcome,
+  type ComputeReply,
   type ComputeTask,
   type PlanTaskInput,
 } from './compute-task.js';
@@ -37,18 +38,16 @@ const shuttingDown = () => new ApiException(503, SHUTTING_DOWN);
  * source resolved to the model or a profile's data). No clock, no database, no randomness reach
  * the worker, so equal tasks give equal answers and caching them is safe; editing a stored
  * profile or a new feed update changes the task and so misses. Results and 400/422 answers are
- * kept (LRU, bounded by their JSON length, HOPWISE_COMPUTE_CACHE_MB; the objects take about
- * 1.5× that of heap); 500s, time-outs and shutdowns are not. Identical requests arriving together
- * share one computation. Results may thus be shared between callers: read them, never modify
- * them (today's callers: Nest's JSON serialisation; the study builder, which copies fields into
- * a new object). Not frozen: freezing every result deeply would cost more than it guards.
+ * kept as their JSON text (LRU, bounded by that text's length, HOPWISE_COMPUTE_CACHE_MB); 500s,
+ * time-outs and shutdowns are not. Identical requests arriving together share one computation.
+ * Every caller parses its own copy, so no caller can change what another one gets.
  */
 @Injectable()
 export class ComputeService implements OnModuleDestroy {
   private readonly logger = new Logger('Compute');
   private readonly pool: ComputePool;
-  private readonly cache: LRUCache<string, ComputeOutcome> | undefined;
-  private readonly inFlight = new Map<string, Promise<ComputeOutcome>>();
+  private readonly cache: LRUCache<string, string> | undefined;
+  private readonly inFlight = new Map<string, Promise<string>>();
   private closing = false;
 
   constructor(
@@ -61,16 +60,16 @@ export class ComputeService implements OnModuleDestroy {
       onError: (err) => this.logger.error(`compute worker failed: ${err.message}`),
     });
     if (config.computeCacheMb > 0) {
-      this.cache = new LRUCache<string, ComputeOutcome>({
+      this.cache = new LRUCache<string, string>({
         maxSize: config.computeCacheMb * 1024 * 1024,
-        // The worker measured the outcome's JSON (off the main thread); the key is a hash.
-        sizeCalculation: (outcome, key) =>
-          (outcome.size ?? JSON.stringify(outcome).length) + key.length,
+        // Outcomes are kept as their JSON text (one byte per character for ASCII): the bound is
+        // close to the memory they take, unlike parsed objects (several times their JSON size).
+        sizeCalculation: (json, key) => json.length + key.length,
       });
     }
   }
 
-  /** One compute route. The result may be shared with other callers: do not modify it. */
+  /** One compute route. */
   async run(route: ComputeRoute, body: unknown, user?: UserView): Promise<unknown> {
     const outcome = await this.compute(route, routeTask(route, this.withStoredProfile(body, user)));
     if (outcome.ok) return outcome.result;
@@ -81,7 +80,6 @@ export class ComputeService implements OnModuleDestroy {
 
   /**
    * The plan of common/src/conditions/plan.ts (errors as its computeErrorStatus maps them).
-   * The result may be shared with other callers: do not modify it.
    */
   async plan(input: PlanTaskInput): Promise<PlanResponse> {
     const outcome = await this.compute('plan', planTask(input));
@@ -91,31 +89,43 @@ export class ComputeService implements OnModuleDestroy {
   }
 
   /** The cached or shared outcome of an equal task, else a new computation. */
-  private compute(label: string, task: ComputeTask): Promise<ComputeOutcome> {
-    if (this.closing) return Promise.reject(shuttingDown());
+  private async compute(label: string, task: ComputeTask): Promise<ComputeOutcome> {
+    if (this.closing) throw shuttingDown();
     const cache = this.cache;
-    if (!cache) return this.dispatch(label, task);
+    if (!cache) return this.outcomeOf(label, await this.dispatch(label, task));
     const key = `${label} ${createHash('sha256').update(task.json).digest('base64url')}`;
     const hit = cache.get(key);
-    if (hit) return Promise.resolve(hit);
+    if (hit !== undefined) return JSON.parse(hit) as ComputeOutcome;
     let shared = this.inFlight.get(key);
     if (!shared) {
-      shared = this.dispatch(label, { ...task, measure: true })
-        .then((outcome) => {
-          if (outcome.ok || outcome.status !== 500) cache.set(key, outcome);
-          return outcome;
+      shared = this.dispatch(label, { ...task, serialize: true })
+        .then((reply) => {
+          const json = typeof reply === 'string' ? reply : JSON.stringify(reply);
+          const outcome = this.outcomeOf(label, json);
+          if (outcome.ok || outcome.status !== 500) cache.set(key, json);
+          return json;
         })
         .finally(() => this.inFlight.delete(key));
       this.inFlight.set(key, shared);
+      return this.outcomeOf(label, await shared, true);
     }
-    return shared;
+    // Each caller parses its own copy: nobody can change what another caller gets.
+    return JSON.parse(await shared) as ComputeOutcome;
   }
 
-  /** One computation in the pool; logs what the server log should know, once per computation. */
-  private async dispatch(label: string, task: ComputeTask): Promise<ComputeOutcome> {
-    let outcome: ComputeOutcome;
+  /** The outcome of a reply; logs a convergence failure (once per computation, not per caller). */
+  private outcomeOf(label: string, reply: ComputeReply, logged = false): ComputeOutcome {
+    const outcome = typeof reply === 'string' ? (JSON.parse(reply) as ComputeOutcome) : reply;
+    if (!logged && !outcome.ok && outcome.convergence) {
+      this.logger.warn(`${label}: ${outcome.convergence}`);
+    }
+    return outcome;
+  }
+
+  /** One computation in the pool (time-outs and shutdown mapped to the API's answers). */
+  private async dispatch(label: string, task: ComputeTask): Promise<ComputeReply> {
     try {
-      outcome = await this.pool.run(task);
+      return await this.pool.run(task);
     } catch (err) {
       if (err instanceof ComputeTimeoutError) {
         this.logger.warn(`${label}: ${err.message}; body ${task.json.slice(0, 2000)}`);
@@ -124,8 +134,6 @@ export class ComputeService implements OnModuleDestroy {
       if (err instanceof ComputePoolClosedError) throw shuttingDown();
       throw err;
     }
-    if (!outcome.ok && outcome.convergence) this.logger.warn(`${label}: ${outcome.convergence}`);
-    return outcome;
   }
 
   /** `{ profile: { id } }` → the stored profile's layers/samples, if this user may see it. */

@@ -19,6 +19,7 @@ import {
 
 /** @typedef {import('./compute-task.js').ComputeTask} ComputeTask */
 /** @typedef {import('./compute-task.js').ComputeOutcome} ComputeOutcome */
+/** @typedef {import('./compute-task.js').ComputeReply} ComputeReply */
 /** @typedef {import('./compute-task.js').PlanTaskInput} PlanTaskInput */
 
 /** @param {unknown} v */
@@ -41,7 +42,7 @@ function plan(input) {
 
 /**
  * @param {ComputeTask} task
- * @returns {ComputeOutcome}
+ * @returns {ComputeReply}
  */
 export default function compute(task) {
   /** @type {ComputeOutcome} */
@@ -64,6 +65,5 @@ export default function compute(task) {
       outcome.internal = String((err instanceof Error && err.stack) || err);
     }
   }
-  if (task.measure) outcome.size = JSON.stringify(outcome).length;
-  return outcome;
+  return task.serialize ? JSON.stringify(outcome) : outcome;
 }
