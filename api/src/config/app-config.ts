@@ -55,7 +55,7 @@ const DEFAULTS = {
   HOPWISE_APP_DIST: 'app/dist',
   HOPWISE_COMPUTE_WORKERS: String(Math.max(1, Math.min(4, availableParallelism()))),
   HOPWISE_COMPUTE_TIMEOUT_MS: '20000',
-  HOPWISE_COMPUTE_CACHE_MB: '64',
+  HOPWISE_COMPUTE_CACHE_MB: '16',
 } as const;
 
 const MIN_SECRET_LENGTH = 32;
