@@ -14,4 +14,6 @@ export function parseChannelsKHz(text: string): { channelsKHz: number[] } | { er
   return { channelsKHz };
 }
 
-export const formatKHz = (kHz: number) => `${kHz.toLocaleString('en-US').replace(/,/g, ' ')} kHz`;
+/** 14 100 kHz, grouped with narrow no-break spaces (SI style) so a channel never wraps. */
+export const formatKHz = (kHz: number) =>
+  `${kHz.toLocaleString('en-US').replace(/,/g, '\u202f')}\u00a0kHz`;
