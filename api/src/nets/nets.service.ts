@@ -34,10 +34,7 @@ export interface PublishedSchedule {
   /** Owners of the member stations and of the control station, and the net's owner. */
   memberUserIds: number[];
   channelsKHz: number[];
-  /** Control station → first member (the watch's reference path). */
-  from: GeoPoint;
-  to: GeoPoint;
-  /** Control station → each member. */
+  /** Control station → each member (the watch judges every one). */
   paths: { memberStationId: number; from: GeoPoint; to: GeoPoint }[];
   slots: { startUtc: string; channelKHz: number | null; overridden: boolean }[];
 }
@@ -432,8 +429,6 @@ export class NetsService {
         controlStationId: net.controlStationId,
         memberUserIds: [...userIds].sort((a, b) => a - b),
         channelsKHz: s.channelsKHz,
-        from: paths[0].from,
-        to: paths[0].to,
         paths,
         slots: s.slots.map((x) => ({
           startUtc: x.startUtc,

@@ -32,8 +32,7 @@ export class ContractWatchSources extends WatchSources {
       slotMinutes: s.slotMinutes,
       memberUserIds: s.memberUserIds,
       channelsKHz: s.channelsKHz,
-      from: s.from,
-      to: s.to,
+      paths: s.paths.map((p) => ({ from: p.from, to: p.to })),
       slots: s.slots.map((x) => ({
         startUtc: x.startUtc,
         channelKHz: x.channelKHz,

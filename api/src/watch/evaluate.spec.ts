@@ -4,6 +4,7 @@ import {
   currentAndNextSlotIndexes,
   evaluateSlot,
   highestMufMHz,
+  worstPathSlot,
   type SlotSubject,
 } from './evaluate.js';
 
@@ -100,5 +101,36 @@ describe('watch: judging one slot', () => {
     expect(currentAndNextSlotIndexes(starts, new Date('2026-12-02T14:20:00Z'))).toEqual([14, 15]);
     expect(currentAndNextSlotIndexes(starts, new Date('2026-12-02T23:59:00Z'))).toEqual([23, 0]);
     expect(currentAndNextSlotIndexes([starts[6]!], new Date('2026-12-02T01:00:00Z'))).toEqual([0]);
+  });
+});
+
+describe('watch: a net slot over every member path', () => {
+  it('takes the worst path’s MUFs and modes, the lowest OWF and the channels usable on all', () => {
+    const near = slot({});
+    const far = slot({
+      mufMHz: { '1': 8.0, '2': 8.6 },
+      owfMHz: 7.3,
+      usableChannelsKHz: [5350, 7150, 7300],
+      bestChannelKHz: 7300,
+      modes: [{ ...near.modes[0], label: '2F2', hops: 2 }],
+    });
+    const both = worstPathSlot([near, far]);
+    expect(highestMufMHz(both)).toBe(8.6); // min over paths of each path's highest MUF
+    expect(both.modes.map((m) => m.label)).toEqual(['2F2']);
+    expect(both.owfMHz).toBe(7.3);
+    expect(both.usableChannelsKHz).toEqual([5350, 7150]);
+    expect(both.bestChannelKHz).toBe(7150);
+    expect(worstPathSlot([near])).toEqual(near);
+  });
+
+  it('a path with no MUF or no OWF closes the slot for the net', () => {
+    const closed = slot({ mufMHz: { '1': null }, owfMHz: null, usableChannelsKHz: [] });
+    const both = worstPathSlot([slot({}), closed]);
+    expect(highestMufMHz(both)).toBeNull();
+    expect(both.owfMHz).toBeNull();
+    expect(both.bestChannelKHz).toBeNull();
+    expect(evaluateSlot(subject, both, undefined).changes.map((c) => c.kind)).toContain(
+      'above-muf',
+    );
   });
 });

@@ -50,6 +50,31 @@ export function highestMufMHz(slot: Pick<PlanSlot, 'mufMHz'>): number | null {
   return values.length > 0 ? Math.max(...values) : null;
 }
 
+/**
+ * One slot as every member path of a net sees it (the same rule as the nets' schedule,
+ * nets/net-schedule.ts): the MUFs and modes of the worst path (the lowest highest MUF; a path
+ * with none is worst), the lowest OWF, the channels usable on every path, and as best channel
+ * the highest of those at or below that OWF.
+ */
+export function worstPathSlot(slots: readonly PlanSlot[]): PlanSlot {
+  const rank = (slot: PlanSlot) => highestMufMHz(slot) ?? -Infinity;
+  const worst = slots.reduce((w, slot) => (rank(slot) < rank(w) ? slot : w));
+  const owfs = slots.map((slot) => slot.owfMHz);
+  const owfMHz = owfs.some((o) => o === null) ? null : Math.min(...(owfs as number[]));
+  const usableChannelsKHz = slots[0].usableChannelsKHz.filter((c) =>
+    slots.every((slot) => slot.usableChannelsKHz.includes(c)),
+  );
+  const atOrBelow = owfMHz === null ? [] : usableChannelsKHz.filter((c) => c / 1000 <= owfMHz);
+  return {
+    startUtc: slots[0].startUtc,
+    mufMHz: worst.mufMHz,
+    owfMHz,
+    usableChannelsKHz,
+    bestChannelKHz: atOrBelow.length ? atOrBelow[atOrBelow.length - 1] : null,
+    modes: worst.modes,
+  };
+}
+
 const hhmm = (iso: string) => `${iso.slice(11, 16)} UTC`;
 const keyTime = (iso: string) => `${iso.slice(0, 16)}Z`;
 const mhz = (v: number | null) => (v === null ? 'none' : `${v.toFixed(2)} MHz`);

@@ -10,9 +10,8 @@ export interface WatchedSchedule {
   slotMinutes: number;
   memberUserIds: number[];
   channelsKHz: number[];
-  /** Control geometry: control station → first member. */
-  from: GeoPoint;
-  to: GeoPoint;
+  /** Every member path: control station → member (at least one). */
+  paths: { from: GeoPoint; to: GeoPoint }[];
   slots: { startUtc: string; channelKHz: number | null; overridden: boolean }[];
 }
 

@@ -16,6 +16,7 @@ import { NoticesRepository, type NewNotice } from '../notices/notices.repository
 import {
   currentAndNextSlotIndexes,
   evaluateSlot,
+  worstPathSlot,
   type SlotState,
   type SlotSubject,
 } from './evaluate.js';
@@ -143,17 +144,30 @@ export class WatchService implements OnApplicationBootstrap, OnApplicationShutdo
         if (s.memberUserIds.length === 0 || s.channelsKHz.length === 0) continue;
         // A schedule for a day that is over has nothing in force any more.
         if (s.dateUtc < dateUtc) continue;
-        const cond = await this.conditionsFor(s.from, s.to);
         const slotMinutes = slotMinutesOf(s.slotMinutes);
-        // The schedule's own day, so plan slots and schedule slots share their start times.
-        const plan = await this.sources.plan({
-          from: s.from,
-          to: s.to,
-          dateUtc: s.dateUtc,
-          channelsKHz: s.channelsKHz,
-          profileSource: cond.profileSource,
-          slotMinutes,
-        });
+        // Every member path, each with the conditions at its own control point; a slot is judged
+        // as the worst path sees it (the schedule's own rule). The schedule's day, so plan slots
+        // and schedule slots share their start times.
+        const conds = await Promise.all(s.paths.map((p) => this.conditionsFor(p.from, p.to)));
+        const plans = await Promise.all(
+          s.paths.map((p, k) =>
+            this.sources.plan({
+              from: p.from,
+              to: p.to,
+              dateUtc: s.dateUtc,
+              channelsKHz: s.channelsKHz,
+              profileSource: conds[k].profileSource,
+              slotMinutes,
+            }),
+          ),
+        );
+        const cond = {
+          ref: [...new Set(conds.map((c) => c.ref))].join('+'),
+          label: [...new Set(conds.map((c) => c.label))].join(' and '),
+        };
+        const plan = {
+          slots: plans[0].slots.map((_, i) => worstPathSlot(plans.map((p) => p.slots[i]))),
+        };
         for (const i of currentAndNextSlotIndexes(
           s.slots.map((x) => x.startUtc),
           now,
