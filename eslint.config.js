@@ -56,6 +56,12 @@ export default tseslint.config(
     },
   },
   {
+    // The server logs through Nest's Logger (levels, context); console only in entry points.
+    files: ['api/src/**/*.ts'],
+    ignores: ['api/src/main.ts', 'api/src/cli/*.main.ts', 'api/src/standins/*/main.ts'],
+    rules: { 'no-console': 'error' },
+  },
+  {
     // Features do not import each other (CONVENTIONS: Client).
     files: ['app/src/features/**/*.{ts,tsx}'],
     rules: {

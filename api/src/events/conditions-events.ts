@@ -1,5 +1,5 @@
 import { EventEmitter } from 'node:events';
-import { Global, Injectable, Module, type OnModuleDestroy } from '@nestjs/common';
+import { Global, Injectable, Logger, Module, type OnModuleDestroy } from '@nestjs/common';
 
 /** A feed update was stored as a profile (source 'feed'). */
 export interface FeedUpdateEvent {
@@ -40,6 +40,8 @@ export class ConditionsEvents implements OnModuleDestroy {
     this.emitter.setMaxListeners(50);
   }
 
+  private readonly logger = new Logger('ConditionsEvents');
+
   emit(event: ConditionsEvent): void {
     queueMicrotask(() => this.emitter.emit(CHANNEL, event));
   }
@@ -50,7 +52,7 @@ export class ConditionsEvents implements OnModuleDestroy {
       void Promise.resolve()
         .then(() => handler(event))
         .catch((err: unknown) => {
-          console.error('[conditions-events] handler failed', err);
+          this.logger.error(`A conditions-event handler failed: ${String(err)}`);
         });
     };
     this.emitter.on(CHANNEL, listener);
