@@ -57,17 +57,32 @@ export async function startProduct(
   let log = '';
   child.stdout?.on('data', (c: Buffer) => (log += c.toString()));
   child.stderr?.on('data', (c: Buffer) => (log += c.toString()));
-  for (let i = 0; i < 300; i++) {
-    if (child.exitCode !== null) throw new Error(`product exited ${child.exitCode}\n${log}`);
+  try {
+    await waitForHealth(baseUrl, child, 60_000);
+  } catch (error) {
+    child.kill('SIGKILL');
+    throw new Error(`${(error as Error).message}\n${log}`, { cause: error });
+  }
+  return { child, baseUrl, log: () => log };
+}
+
+/** Polls `/api/health` until it answers 200; throws if the process exits or time runs out. */
+export async function waitForHealth(
+  baseUrl: string,
+  child: ChildProcess,
+  timeoutMs: number,
+): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`the product exited with code ${child.exitCode}`);
     try {
-      if ((await fetch(`${baseUrl}/api/health`)).ok) return { child, baseUrl, log: () => log };
+      if ((await fetch(`${baseUrl}/api/health`)).ok) return;
     } catch {
       // not listening yet
     }
     await new Promise((r) => setTimeout(r, 200));
   }
-  child.kill('SIGKILL');
-  throw new Error(`product did not start\n${log}`);
+  throw new Error(`the product did not answer ${baseUrl}/api/health within ${timeoutMs} ms`);
 }
 
 /** Signs in a demo account (password of the demo seed) and returns the access token. */

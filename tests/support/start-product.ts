@@ -1,50 +1,16 @@
 // Starts the built product (node api/dist/main.js) on a free loopback port with a fresh SQLite
 // file and the demo seed, waits for /api/health, and hands its base URL to the tests.
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { TestProject } from 'vitest/node';
+import { freePort, repoRoot, waitForHealth } from './product-process.js';
 
 declare module 'vitest' {
   export interface ProvidedContext {
     baseUrl: string;
   }
-}
-
-const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../..');
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      server.close(() => resolve(port));
-    });
-    server.on('error', reject);
-  });
-}
-
-async function waitForHealth(
-  baseUrl: string,
-  child: ChildProcess,
-  timeoutMs: number,
-): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`the product exited with code ${child.exitCode}`);
-    try {
-      const response = await fetch(`${baseUrl}/api/health`);
-      if (response.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`the product did not answer ${baseUrl}/api/health within ${timeoutMs} ms`);
 }
 
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {

@@ -96,27 +96,27 @@ export class ComputeService implements OnModuleDestroy {
     const key = `${label} ${createHash('sha256').update(task.json).digest('base64url')}`;
     const hit = cache.get(key);
     if (hit !== undefined) return JSON.parse(hit) as ComputeOutcome;
-    let shared = this.inFlight.get(key);
-    if (!shared) {
-      shared = this.dispatch(label, { ...task, serialize: true })
-        .then((reply) => {
-          const json = typeof reply === 'string' ? reply : JSON.stringify(reply);
-          const outcome = this.outcomeOf(label, json);
-          if (outcome.ok || outcome.status !== 500) cache.set(key, json);
-          return json;
-        })
-        .finally(() => this.inFlight.delete(key));
-      this.inFlight.set(key, shared);
-      return this.outcomeOf(label, await shared, true);
-    }
+    const shared = this.inFlight.get(key);
     // Each caller parses its own copy: nobody can change what another caller gets.
-    return JSON.parse(await shared) as ComputeOutcome;
+    if (shared) return JSON.parse(await shared) as ComputeOutcome;
+    let first!: ComputeOutcome;
+    const computing = this.dispatch(label, { ...task, serialize: true })
+      .then((reply) => {
+        const json = typeof reply === 'string' ? reply : JSON.stringify(reply);
+        first = this.outcomeOf(label, json); // the first caller's copy
+        if (first.ok || first.status !== 500) cache.set(key, json);
+        return json;
+      })
+      .finally(() => this.inFlight.delete(key));
+    this.inFlight.set(key, computing);
+    await computing;
+    return first;
   }
 
   /** The outcome of a reply; logs a convergence failure (once per computation, not per caller). */
-  private outcomeOf(label: string, reply: ComputeReply, logged = false): ComputeOutcome {
+  private outcomeOf(label: string, reply: ComputeReply): ComputeOutcome {
     const outcome = typeof reply === 'string' ? (JSON.parse(reply) as ComputeOutcome) : reply;
-    if (!logged && !outcome.ok && outcome.convergence) {
+    if (!outcome.ok && outcome.convergence) {
       this.logger.warn(`${label}: ${outcome.convergence}`);
     }
     return outcome;

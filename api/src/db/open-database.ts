@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
 import { drizzle, type BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
 import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
+import { LRUCache } from 'lru-cache';
 import * as schema from './schema.js';
 
 export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Database };
@@ -22,17 +23,12 @@ const STATEMENT_CACHE_SIZE = 256;
  */
 export function cacheStatements(sqlite: Database.Database, size = STATEMENT_CACHE_SIZE): void {
   const prepare = sqlite.prepare.bind(sqlite);
-  const cache = new Map<string, Database.Statement>();
+  const cache = new LRUCache<string, Database.Statement>({ max: size });
   sqlite.prepare = ((source: string) => {
     const cached = cache.get(source);
-    if (cached && !cached.busy) {
-      cache.delete(source); // re-insert: most recently used last
-      cache.set(source, cached);
-      return cached.reader ? cached.raw(false) : cached;
-    }
+    if (cached && !cached.busy) return cached.reader ? cached.raw(false) : cached;
     const stmt = prepare(source);
     cache.set(source, stmt);
-    if (cache.size > size) cache.delete(cache.keys().next().value as string);
     return stmt;
   }) as typeof sqlite.prepare;
 }
